@@ -1,0 +1,33 @@
+#pragma once
+// Carbonate texture class from observed attributes, after Dunham (1962, AAPG Memoir 1:108) with
+// the Embry & Klovan (1971, Bull. Can. Petrol. Geol. 19:730) extension for coarse and organically
+// bound rocks.
+#include "atollog/engine/core_records.hpp"
+#include "atollog/engine/vocabulary.hpp"
+
+#include <optional>
+#include <string>
+
+namespace atollog {
+
+struct TextureAttributes {
+    bool depositional_texture_recognisable = true; ///< false -> crystalline
+    std::optional<Binding> binding;          ///< organic binding at deposition and its role
+    std::optional<double> coarse_pct;        ///< share of components over 2 mm, 0-100
+    std::optional<bool> mud_supported;       ///< matrix (mud) supported rather than grain supported
+    std::optional<double> grains_pct;        ///< grains as a share of the rock, 0-100
+};
+
+struct TextureSuggestion {
+    std::optional<Texture> texture; ///< nullopt when the attributes are not enough
+    std::string reason;             ///< the rule that decided, or what attribute is missing
+};
+
+/// Exactly 10 % is not "more than 10 %": 10 % coarse components is not yet floatstone/rudstone,
+/// and a mud-supported rock with exactly 10 % grains is a mudstone.
+TextureSuggestion classifyTexture(const TextureAttributes& a);
+
+/// The attributes an interval carries (binding, coarse_pct, mud_supported, grains_pct).
+TextureAttributes textureAttributesOf(const LithInterval& interval);
+
+} // namespace atollog
