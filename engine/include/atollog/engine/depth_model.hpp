@@ -34,8 +34,11 @@ class DepthModel {
     explicit DepthModel(std::vector<CoreRun> runs);
 
     const std::vector<CoreRun>& runs() const { return runs_; }
+    /// Runs are closed [top, base]; a depth on the boundary of two touching runs belongs to the
+    /// run that starts there. Throws std::invalid_argument on a non-finite depth.
     DepthLocation locate(double depth_m) const;
-    /// The true depths a logged depth may stand for. Outside any run, the point itself.
+    /// The true depths a logged depth may stand for. Outside any run, the point itself; in the
+    /// unrecovered part of a run, the depth down to the run base. Throws as locate does.
     DepthRange trueDepthRange(double depth_m) const;
     double cored_m() const;
     double recovered_m() const; ///< recovered length counted up to each run's cored length

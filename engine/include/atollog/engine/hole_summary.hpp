@@ -25,7 +25,9 @@ struct HoleSummary {
     std::size_t exposure_surface_count = 0;
 };
 
-/// One summary per hole, in the order of data.holes.
+/// One summary per hole, in the order of data.holes. Throws std::invalid_argument (naming the
+/// table, row or hole) rather than summing data it cannot use: duplicate hole ids, runs that
+/// DepthModel refuses, intervals without a positive finite thickness. Validate first.
 std::vector<HoleSummary> summarizeHoles(const CoreDataset& data);
 
 } // namespace atollog

@@ -7,6 +7,7 @@
 
 #include <optional>
 #include <string>
+#include <vector>
 
 namespace atollog {
 
@@ -16,6 +17,9 @@ struct TextureAttributes {
     std::optional<double> coarse_pct;        ///< share of components over 2 mm, 0-100
     std::optional<bool> mud_supported;       ///< matrix (mud) supported rather than grain supported
     std::optional<double> grains_pct;        ///< grains as a share of the rock, 0-100
+    /// Grain-supported rock with mud between the grains (packstone) or without (grainstone).
+    /// The core data folder has no such column, so textureAttributesOf leaves it nullopt.
+    std::optional<bool> mud_present;
 };
 
 struct TextureSuggestion {
@@ -25,7 +29,13 @@ struct TextureSuggestion {
 
 /// Exactly 10 % is not "more than 10 %": 10 % coarse components is not yet floatstone/rudstone,
 /// and a mud-supported rock with exactly 10 % grains is a mudstone.
+/// Throws std::invalid_argument when coarse_pct or grains_pct is non-finite or outside 0-100.
 TextureSuggestion classifyTexture(const TextureAttributes& a);
+
+/// Every texture the attributes allow when each attribute not given may take any value, in
+/// declaration order of Texture. Boundstone never appears (its sub-classes do). A single entry
+/// equals classifyTexture's answer. Throws as classifyTexture does.
+std::vector<Texture> possibleTextures(const TextureAttributes& a);
 
 /// The attributes an interval carries (binding, coarse_pct, mud_supported, grains_pct).
 TextureAttributes textureAttributesOf(const LithInterval& interval);
