@@ -13,7 +13,8 @@ namespace atollog::db {
 
 struct CsvRecord {
     std::vector<std::string> fields;
-    std::size_t line = 0; ///< 1-based physical line on which the record starts
+    std::size_t line = 0;   ///< 1-based physical line on which the record starts
+    std::size_t offset = 0; ///< byte offset of the record's first byte in the text
 };
 
 /// Reads `text` (the whole file; `file` is its name for messages). Calls `onHeader` once with the
