@@ -49,7 +49,13 @@ class ProjectStore {
     CoreDataset loadDataset() const;
     /// Replaces the whole dataset in one transaction; on any failure nothing changes.
     void replaceDataset(const CoreDataset& data);
+    /// Replaces the dataset and records the run that produced it (e.g. an import) in one
+    /// transaction, so provenance and data never disagree. Returns the run's id.
+    std::int64_t replaceDataset(const CoreDataset& data, ModelRunRecord produced_by);
+    /// True when any dataset table holds a row.
     bool hasData() const;
+    /// Number of stored rows of one dataset table.
+    std::int64_t rowCount(Table table) const;
 
     std::int64_t recordModelRun(ModelRunRecord run);
     std::vector<ModelRunRecord> modelRuns() const;
@@ -61,6 +67,8 @@ class ProjectStore {
 
   private:
     ProjectStore(std::filesystem::path path, std::unique_ptr<SQLite::Database> db);
+    void replaceDatasetRows(const CoreDataset& data);  ///< inside the caller's transaction
+    std::int64_t insertModelRun(ModelRunRecord& run);  ///< fills id, version, time
     std::filesystem::path path_;
     std::unique_ptr<SQLite::Database> db_;
 };
