@@ -1,0 +1,16 @@
+#!/usr/bin/env bash
+# The test command of the README: install what is missing, build with warnings as errors, run
+# every test; then build the tests with AddressSanitizer + UBSan and run them again.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+
+bash .ci/install-deps
+jobs=$(nproc)
+
+cmake --preset ci
+cmake --build --preset ci -j "$jobs"
+ctest --preset ci -j "$jobs"
+
+cmake --preset ci-sanitize
+cmake --build --preset ci-sanitize -j "$jobs"
+ASAN_OPTIONS=detect_leaks=1 UBSAN_OPTIONS=print_stacktrace=1 ctest --preset ci-sanitize -j "$jobs"
