@@ -135,11 +135,13 @@ void ProjectStore::replaceDataset(const CoreDataset& data) {
     }
 }
 
-std::int64_t ProjectStore::replaceDataset(const CoreDataset& data, ModelRunRecord produced_by) {
+std::int64_t ProjectStore::replaceDataset(const CoreDataset& data, ModelRunRecord produced_by,
+                                          const std::function<std::string()>& inputs_hash) {
     try {
         ForeignKeysCheckedAtEnd foreign_keys(*db_);
         SQLite::Transaction transaction(*db_);
         replaceDatasetRows(data);
+        if (inputs_hash) produced_by.inputs_sha256 = inputs_hash();
         const std::int64_t run_id = insertModelRun(produced_by);
         transaction.commit();
         return run_id;

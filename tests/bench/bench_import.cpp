@@ -29,6 +29,7 @@ struct Measured {
 
 // Runs `work` in a forked child; returns its wall time and peak RSS. Throws if the child failed.
 Measured inChild(const std::function<int()>& work) {
+    std::fflush(nullptr); // the child must not inherit (and print again) buffered output
     const auto start = std::chrono::steady_clock::now();
     const pid_t pid = fork();
     if (pid < 0) throw std::runtime_error("fork failed");

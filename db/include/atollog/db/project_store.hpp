@@ -5,6 +5,7 @@
 
 #include <cstdint>
 #include <filesystem>
+#include <functional>
 #include <memory>
 #include <optional>
 #include <string>
@@ -50,8 +51,11 @@ class ProjectStore {
     /// Replaces the whole dataset in one transaction; on any failure nothing changes.
     void replaceDataset(const CoreDataset& data);
     /// Replaces the dataset and records the run that produced it (e.g. an import) in one
-    /// transaction, so provenance and data never disagree. Returns the run's id.
-    std::int64_t replaceDataset(const CoreDataset& data, ModelRunRecord produced_by);
+    /// transaction, so provenance and data never disagree. Returns the run's id. When given,
+    /// `inputs_hash` is called after the rows are written and fills produced_by.inputs_sha256,
+    /// so a hash computed on another thread can overlap the writing.
+    std::int64_t replaceDataset(const CoreDataset& data, ModelRunRecord produced_by,
+                                const std::function<std::string()>& inputs_hash = {});
     /// True when any dataset table holds a row.
     bool hasData() const;
     /// Number of stored rows of one dataset table.
