@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # The test command of the README: install what is missing, build with warnings as errors, run
-# every test; then build the tests with AddressSanitizer + UBSan and run them again.
+# every test; then build the tests with AddressSanitizer + UBSan and run them again; last, build
+# the libFuzzer targets with clang and run each for 60 seconds (tests/fuzz/README.md).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
@@ -14,3 +15,5 @@ ctest --preset ci -j "$jobs"
 cmake --preset ci-sanitize
 cmake --build --preset ci-sanitize -j "$jobs"
 ASAN_OPTIONS=detect_leaks=1 UBSAN_OPTIONS=print_stacktrace=1 ctest --preset ci-sanitize -j "$jobs"
+
+ATOLLOG_FUZZ_JOBS="$jobs" bash tests/fuzz/run-fuzzers.sh 60

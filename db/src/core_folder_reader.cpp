@@ -192,7 +192,20 @@ InputProblem problemOf(const DataIssue& issue, const std::vector<ReadTable>& tab
 
 } // namespace
 
-CoreDataset readCoreFolder(const fs::path& folder, std::vector<InputProblem>* warnings) {
+struct ParsedCoreFolder::Impl {
+    CoreDataset data;
+    std::vector<ReadTable> tables;
+};
+
+ParsedCoreFolder::ParsedCoreFolder(std::unique_ptr<Impl> impl) : impl_(std::move(impl)) {}
+ParsedCoreFolder::ParsedCoreFolder(ParsedCoreFolder&&) noexcept = default;
+ParsedCoreFolder& ParsedCoreFolder::operator=(ParsedCoreFolder&&) noexcept = default;
+ParsedCoreFolder::~ParsedCoreFolder() = default;
+
+const CoreDataset& ParsedCoreFolder::data() const { return impl_->data; }
+CoreDataset ParsedCoreFolder::takeData() && { return std::move(impl_->data); }
+
+ParsedCoreFolder parseCoreFolder(const fs::path& folder) {
     ProblemList problems;
     std::error_code ec;
     if (!fs::is_directory(folder, ec))
@@ -207,19 +220,21 @@ CoreDataset readCoreFolder(const fs::path& folder, std::vector<InputProblem>* wa
                                      ": a core data folder needs at least holes.csv",
                                  "add holes.csv with at least the columns hole and site"));
 
-    CoreDataset data;
-    std::vector<ReadTable> tables;
-    tables.reserve(files.size());
+    auto impl = std::make_unique<ParsedCoreFolder::Impl>();
+    impl->tables.reserve(files.size());
     for (const auto& [table, path] : files) {
-        tables.push_back(ReadTable{table, {}, nullptr, {}, {}});
-        readTable(tables.back(), path, data, problems);
+        impl->tables.push_back(ReadTable{table, {}, nullptr, {}, {}});
+        readTable(impl->tables.back(), path, impl->data, problems);
     }
     if (problems.count() > 0) throw InputError(problems.listed());
+    return ParsedCoreFolder(std::move(impl));
+}
 
+std::vector<InputProblem> ParsedCoreFolder::check() const {
     std::vector<InputProblem> found;
     bool has_errors = false;
-    for (const DataIssue& issue : validateDataset(data)) {
-        found.push_back(problemOf(issue, tables));
+    for (const DataIssue& issue : validateDataset(impl_->data)) {
+        found.push_back(problemOf(issue, impl_->tables));
         has_errors = has_errors || issue.severity == Severity::Error;
     }
     if (has_errors) {
@@ -229,8 +244,14 @@ CoreDataset readCoreFolder(const fs::path& folder, std::vector<InputProblem>* wa
         all.addAll(found);
         throw InputError(all.listed());
     }
+    return found;
+}
+
+CoreDataset readCoreFolder(const fs::path& folder, std::vector<InputProblem>* warnings) {
+    ParsedCoreFolder parsed = parseCoreFolder(folder);
+    std::vector<InputProblem> found = parsed.check();
     if (warnings) *warnings = std::move(found);
-    return data;
+    return std::move(parsed).takeData();
 }
 
 } // namespace atollog::db

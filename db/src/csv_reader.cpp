@@ -37,7 +37,11 @@ void readCsv(std::string_view text, const std::string& file,
 std::string csvField(std::string_view s) {
     const bool edge_space = !s.empty() && (s.front() == ' ' || s.front() == '\t' ||
                                            s.back() == ' ' || s.back() == '\t');
-    if (!edge_space && s.find_first_of(",\"\r\n") == std::string_view::npos) return std::string(s);
+    // A field starting with U+FEFF is quoted too: unquoted at the start of a file, the reader
+    // would take those three bytes for the byte order mark and drop them (found by fuzzing).
+    const bool leading_bom = s.substr(0, 3) == "\xEF\xBB\xBF";
+    if (!edge_space && !leading_bom && s.find_first_of(",\"\r\n") == std::string_view::npos)
+        return std::string(s);
     std::string out;
     out.reserve(s.size() + 2);
     out += '"';

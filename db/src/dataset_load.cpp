@@ -5,6 +5,7 @@
 #include "atollog/db/errors.hpp"
 
 #include <SQLiteCpp/Statement.h>
+#include <sqlite3.h>
 
 #include <algorithm>
 #include <string>
@@ -19,9 +20,40 @@ namespace {
                        what + "; the project was changed outside atollog");
 }
 
+// A cell of the wrong storage class. Declared types do not stop another tool from storing a
+// word in a REAL column (https://www.sqlite.org/datatype3.html, "Type Affinity"), and SQLite
+// would convert it to 0 on reading; loadRows adds the table and row to the message.
+struct WrongCellType {
+    std::string what;
+};
+
+void requireStorage(const SQLite::Column& c, int storage, const char* expected) {
+    if (c.getType() == storage || (storage == SQLITE_FLOAT && c.getType() == SQLITE_INTEGER))
+        return;
+    throw WrongCellType{std::string("column ") + c.getName() + " holds " +
+                        (c.isNull() ? std::string("nothing") : "'" + c.getString() + "'") +
+                        " where " + expected + " belongs"};
+}
+
+double real(const SQLite::Column& c) {
+    requireStorage(c, SQLITE_FLOAT, "a number");
+    return c.getDouble();
+}
+
+std::int64_t integer(const SQLite::Column& c) {
+    requireStorage(c, SQLITE_INTEGER, "a whole number");
+    return c.getInt64();
+}
+
 std::optional<double> optionalReal(const SQLite::Column& c) {
     if (c.isNull()) return std::nullopt;
-    return c.getDouble();
+    return real(c);
+}
+
+/// The table a query of ours reads: the word after " FROM ".
+std::string_view tableOf(std::string_view sql) {
+    const std::size_t from = sql.find(" FROM ") + 6;
+    return sql.substr(from, sql.find(' ', from) - from);
 }
 
 std::string optionalText(const SQLite::Column& c) { return c.isNull() ? "" : c.getString(); }
@@ -64,7 +96,11 @@ std::vector<std::int64_t> loadRows(SQLite::Database& db, const std::string& sql,
     while (query.executeStep()) {
         const std::int64_t id = query.getColumn(0).getInt64();
         ids.push_back(id);
-        rows.push_back(readRow(query, id));
+        try {
+            rows.push_back(readRow(query, id));
+        } catch (const WrongCellType& e) {
+            badContent(tableOf(sql), id, e.what);
+        }
     }
     return ids;
 }
@@ -115,9 +151,9 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             CoreRun r;
             r.hole = textId(hole_text, q.getColumn(1).getInt64(), "core_run", id, "hole_id");
             r.run = q.getColumn(2).getString();
-            r.top_m = q.getColumn(3).getDouble();
-            r.base_m = q.getColumn(4).getDouble();
-            r.recovered_m = q.getColumn(5).getDouble();
+            r.top_m = real(q.getColumn(3));
+            r.base_m = real(q.getColumn(4));
+            r.recovered_m = real(q.getColumn(5));
             return r;
         });
     const auto interval_ids = loadRows(
@@ -127,12 +163,12 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
         data.intervals, [&](SQLite::Statement& q, std::int64_t id) {
             LithInterval l;
             l.hole = textId(hole_text, q.getColumn(1).getInt64(), "lith_interval", id, "hole_id");
-            l.top_m = q.getColumn(2).getDouble();
-            l.base_m = q.getColumn(3).getDouble();
+            l.top_m = real(q.getColumn(2));
+            l.base_m = real(q.getColumn(3));
             l.rock = parseWord<Rock>(q.getColumn(4), parseRock, "lith_interval", id);
             l.texture =
                 parseOptionalWord<Texture>(q.getColumn(5), parseTexture, "lith_interval", id);
-            if (!q.getColumn(6).isNull()) l.mud_supported = q.getColumn(6).getInt() != 0;
+            if (!q.getColumn(6).isNull()) l.mud_supported = integer(q.getColumn(6)) != 0;
             l.grains_pct = optionalReal(q.getColumn(7));
             l.coarse_pct = optionalReal(q.getColumn(8));
             l.binding =
@@ -153,8 +189,8 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             Sample s;
             s.hole = textId(hole_text, q.getColumn(1).getInt64(), "sample", id, "hole_id");
             s.sample = q.getColumn(2).getString();
-            s.top_m = q.getColumn(3).getDouble();
-            s.base_m = q.getColumn(4).getDouble();
+            s.top_m = real(q.getColumn(3));
+            s.base_m = real(q.getColumn(4));
             s.kind = optionalText(q.getColumn(5));
             sample_text.emplace(id, s.sample);
             return s;
@@ -182,7 +218,7 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
                 o.abundance = parseWord<AbundanceClass>(q.getColumn(3), parseAbundanceClass,
                                                         "occurrence", id);
             } else if (!q.getColumn(4).isNull()) {
-                o.abundance = q.getColumn(4).getInt64();
+                o.abundance = integer(q.getColumn(4));
             }
             o.status = parseWord<OccurrenceStatus>(q.getColumn(5), parseOccurrenceStatus,
                                                    "occurrence", id);
@@ -197,8 +233,8 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             e.taxon = textId(taxon_text, q.getColumn(2).getInt64(), "time_scale_event", id,
                              "taxon_id");
             e.kind = parseWord<EventKind>(q.getColumn(3), parseEventKind, "time_scale_event", id);
-            e.age_ma = q.getColumn(4).getDouble();
-            e.age_sd_ma = q.getColumn(5).getDouble();
+            e.age_ma = real(q.getColumn(4));
+            e.age_sd_ma = real(q.getColumn(5));
             e.source = optionalText(q.getColumn(6));
             event_text.emplace(id, e.event);
             return e;
@@ -221,18 +257,18 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             // The schema keeps the four required U-series values all present or all absent.
             if (!q.getColumn(7).isNull()) {
                 UThMeasurement u;
-                u.th230_u238_act = q.getColumn(7).getDouble();
-                u.th230_u238_act_sd = q.getColumn(8).getDouble();
-                u.u234_u238_act = q.getColumn(9).getDouble();
-                u.u234_u238_act_sd = q.getColumn(10).getDouble();
+                u.th230_u238_act = real(q.getColumn(7));
+                u.th230_u238_act_sd = real(q.getColumn(8));
+                u.u234_u238_act = real(q.getColumn(9));
+                u.u234_u238_act_sd = real(q.getColumn(10));
                 u.th232_ppb = optionalReal(q.getColumn(11));
                 u.u238_ppb = optionalReal(q.getColumn(12));
                 d.uth = u;
             }
             if (!q.getColumn(13).isNull()) {
                 C14Measurement c;
-                c.f14c = q.getColumn(13).getDouble();
-                c.f14c_sd = q.getColumn(14).getDouble();
+                c.f14c = real(q.getColumn(13));
+                c.f14c_sd = real(q.getColumn(14));
                 c.delta_r_yr = optionalReal(q.getColumn(15));
                 c.delta_r_sd_yr = optionalReal(q.getColumn(16));
                 d.c14 = c;
@@ -259,8 +295,8 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
         db, "SELECT id, age_ma, level_m, level_sd_m FROM sea_level_point ORDER BY id",
         data.sea_level, [](SQLite::Statement& q, std::int64_t) {
             SeaLevelPoint p;
-            p.age_ma = q.getColumn(1).getDouble();
-            p.level_m = q.getColumn(2).getDouble();
+            p.age_ma = real(q.getColumn(1));
+            p.level_m = real(q.getColumn(2));
             p.level_sd_m = optionalReal(q.getColumn(3));
             return p;
         });
@@ -268,9 +304,9 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
         db, "SELECT id, cal_bp, c14_bp, sd FROM calibration_point ORDER BY id", data.curve,
         [](SQLite::Statement& q, std::int64_t) {
             CalibrationPoint p;
-            p.cal_bp = q.getColumn(1).getDouble();
-            p.c14_bp = q.getColumn(2).getDouble();
-            p.sd = q.getColumn(3).getDouble();
+            p.cal_bp = real(q.getColumn(1));
+            p.c14_bp = real(q.getColumn(2));
+            p.sd = real(q.getColumn(3));
             return p;
         });
 

@@ -1,5 +1,4 @@
-// importCoreFolder: read and check the whole folder first (nothing is written if it is bad),
-// then replace the dataset and record the import in one transaction.
+// Import of a core data folder: read, check and write, all or nothing.
 #include "atollog/db/importer.hpp"
 
 #include "atollog/db/core_folder.hpp"
@@ -40,6 +39,11 @@ void refuseIfHoldingData(const ProjectStore& store) {
                        std::to_string(total) + " rows in all); use --replace to replace them");
 }
 
+struct CheckedInputs {
+    std::vector<InputProblem> warnings;
+    std::string sha256;
+};
+
 } // namespace
 
 ImportResult importCoreFolder(ProjectStore& store, const std::filesystem::path& folder,
@@ -47,9 +51,20 @@ ImportResult importCoreFolder(ProjectStore& store, const std::filesystem::path& 
     // Checked before reading: refusing takes no time, reading a large folder does.
     if (!replace) refuseIfHoldingData(store);
 
-    ImportResult result;
-    const CoreDataset data = readCoreFolder(folder, &result.warnings);
+    const ParsedCoreFolder parsed = parseCoreFolder(folder); // syntax errors throw here
+    const CoreDataset& data = parsed.data();
 
+    // The whole-dataset checks and the input hash only read the data: they run on the second
+    // core while this one writes the rows. Nothing commits before both are done; a check that
+    // fails throws inside the write transaction, which then rolls back.
+    std::future<CheckedInputs> checked = std::async(std::launch::async, [&parsed, &data] {
+        CheckedInputs c;
+        c.warnings = parsed.check();
+        c.sha256 = ProjectStore::datasetHash(data);
+        return c;
+    });
+
+    ImportResult result;
     std::string counts;
     for (Table t : kAllTables) {
         const std::size_t n = rowsOf(data, t);
@@ -58,22 +73,27 @@ ImportResult importCoreFolder(ProjectStore& store, const std::filesystem::path& 
                   std::to_string(n);
     }
 
-    // The input hash reads the dataset only; computing it on the second core while the rows are
-    // written takes it off the import's critical path.
-    std::future<std::string> inputsHash =
-        std::async(std::launch::async, [&data] { return ProjectStore::datasetHash(data); });
-
     ModelRunRecord run;
     run.kind = "import";
     run.settings = "folder=" + std::filesystem::absolute(folder).lexically_normal().string() +
                    "\nreplace=" + (replace ? "1" : "0");
-    run.summary = "imported " + std::to_string(result.row_count) + " rows (" + counts + ")" +
-                  (result.warnings.empty()
-                       ? ""
-                       : "; " + std::to_string(result.warnings.size()) + " warnings");
-    result.model_run_id = store.replaceDataset(data, std::move(run), [&inputsHash] {
-        return inputsHash.get();
-    });
+    try {
+        result.model_run_id = store.replaceDataset(data, std::move(run), [&](ModelRunRecord& r) {
+            CheckedInputs c = checked.get();
+            r.inputs_sha256 = std::move(c.sha256);
+            r.summary = "imported " + std::to_string(result.row_count) + " rows (" + counts + ")" +
+                        (c.warnings.empty()
+                             ? ""
+                             : "; " + std::to_string(c.warnings.size()) +
+                                   (c.warnings.size() == 1 ? " warning" : " warnings"));
+            result.warnings = std::move(c.warnings);
+        });
+    } catch (...) {
+        // Writing can fail on data the checks would have explained better (an unknown
+        // reference, say): prefer the checks' located message when they found errors.
+        if (checked.valid()) checked.get(); // throws InputError when the data is bad
+        throw;
+    }
     return result;
 }
 

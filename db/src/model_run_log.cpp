@@ -3,6 +3,7 @@
 #include "atollog/db/errors.hpp"
 #include "atollog/db/project_store.hpp"
 #include "atollog/db/version.hpp"
+#include "write_transaction.hpp"
 
 #include <SQLiteCpp/Database.h>
 #include <SQLiteCpp/Exception.h>
@@ -51,7 +52,11 @@ std::int64_t ProjectStore::insertModelRun(ModelRunRecord& run) {
 
 std::int64_t ProjectStore::recordModelRun(ModelRunRecord run) {
     try {
-        return insertModelRun(run);
+        // Its own IMMEDIATE transaction, so a concurrent writer makes it wait, not fail.
+        detail::WriteTransaction transaction(*db_);
+        const std::int64_t id = insertModelRun(run);
+        transaction.commit();
+        return id;
     } catch (const SQLite::Exception& e) {
         throw ProjectError("cannot record the " + run.kind + " run in " + path_.string() + ": " +
                            e.what());

@@ -122,6 +122,7 @@ void hardenConnection(SQLite::Database& db) {
 }
 
 void configureProjectConnection(SQLite::Database& db, const std::filesystem::path& file) {
+    setConfig(db, SQLITE_DBCONFIG_NO_CKPT_ON_CLOSE, 0, "checkpoint on close");
     db.exec("PRAGMA foreign_keys = ON");
     // A larger page cache keeps the occurrence indexes in memory during a bulk replace.
     db.exec("PRAGMA cache_size = -65536");
@@ -138,6 +139,10 @@ std::unique_ptr<SQLite::Database> openCheckedProject(const std::filesystem::path
     try {
         auto db = std::make_unique<SQLite::Database>(file, SQLite::OPEN_READWRITE);
         hardenConnection(*db);
+        // Until the file passes the checks, closing must not write it: the last connection to
+        // close normally checkpoints the WAL into the database file, which would merge frames
+        // planted by another tool into a file we refuse. configureProjectConnection lifts this.
+        setConfig(*db, SQLITE_DBCONFIG_NO_CKPT_ON_CLOSE, 1, "no checkpoint on close");
 
         const int application_id = readApplicationId(*db);
         const int version = readUserVersion(*db);

@@ -6,6 +6,7 @@
 #include "atollog/db/schema.hpp"
 #include "dataset_rows.hpp"
 #include "project_guard.hpp"
+#include "write_transaction.hpp"
 
 #include <SQLiteCpp/Database.h>
 #include <SQLiteCpp/Exception.h>
@@ -61,7 +62,7 @@ ProjectStore ProjectStore::create(const std::filesystem::path& file) {
                                                           SQLite::OPEN_CREATE);
         detail::hardenConnection(*db);
         detail::configureProjectConnection(*db, file);
-        SQLite::Transaction transaction(*db);
+        detail::WriteTransaction transaction(*db);
         db->exec("PRAGMA application_id = " + std::to_string(kApplicationId));
         applyMigrations(*db, projectMigrations());
         transaction.commit();
@@ -83,7 +84,7 @@ ProjectStore ProjectStore::open(const std::filesystem::path& file) {
     try {
         detail::configureProjectConnection(*db, file);
         if (readUserVersion(*db) < kSchemaVersion) {
-            SQLite::Transaction transaction(*db);
+            detail::WriteTransaction transaction(*db);
             applyMigrations(*db, projectMigrations());
             transaction.commit();
         }
@@ -123,7 +124,7 @@ void ProjectStore::replaceDatasetRows(const CoreDataset& data) {
 void ProjectStore::replaceDataset(const CoreDataset& data) {
     try {
         ForeignKeysCheckedAtEnd foreign_keys(*db_);
-        SQLite::Transaction transaction(*db_);
+        detail::WriteTransaction transaction(*db_);
         replaceDatasetRows(data);
         transaction.commit();
     } catch (const ProjectError& e) {
@@ -136,12 +137,12 @@ void ProjectStore::replaceDataset(const CoreDataset& data) {
 }
 
 std::int64_t ProjectStore::replaceDataset(const CoreDataset& data, ModelRunRecord produced_by,
-                                          const std::function<std::string()>& inputs_hash) {
+                                          const std::function<void(ModelRunRecord&)>& complete_run) {
     try {
         ForeignKeysCheckedAtEnd foreign_keys(*db_);
-        SQLite::Transaction transaction(*db_);
+        detail::WriteTransaction transaction(*db_);
         replaceDatasetRows(data);
-        if (inputs_hash) produced_by.inputs_sha256 = inputs_hash();
+        if (complete_run) complete_run(produced_by);
         const std::int64_t run_id = insertModelRun(produced_by);
         transaction.commit();
         return run_id;

@@ -52,10 +52,11 @@ class ProjectStore {
     void replaceDataset(const CoreDataset& data);
     /// Replaces the dataset and records the run that produced it (e.g. an import) in one
     /// transaction, so provenance and data never disagree. Returns the run's id. When given,
-    /// `inputs_hash` is called after the rows are written and fills produced_by.inputs_sha256,
-    /// so a hash computed on another thread can overlap the writing.
+    /// `complete_run` is called after the rows are written and before the run is recorded, so
+    /// work on another thread (checks, the input hash) can overlap the writing and still fill
+    /// the record; if it throws, the transaction rolls back and the exception propagates.
     std::int64_t replaceDataset(const CoreDataset& data, ModelRunRecord produced_by,
-                                const std::function<std::string()>& inputs_hash = {});
+                                const std::function<void(ModelRunRecord&)>& complete_run = {});
     /// True when any dataset table holds a row.
     bool hasData() const;
     /// Number of stored rows of one dataset table.

@@ -1,0 +1,137 @@
+#pragma once
+
+#include "draw/colour.hpp"
+#include "draw/scene_rect.hpp"
+
+#include <optional>
+#include <string>
+#include <variant>
+#include <vector>
+
+namespace atollog::draw {
+
+/// What a drawn item stands for. Tests find items by role, the viewer builds tooltips from role
+/// and key; painting ignores both.
+enum class ItemRole {
+    None,
+    Title,
+    Subtitle,
+    DepthAxis,
+    DepthTick,
+    DepthLabel,
+    SampleTick,
+    RecoveryRun,
+    TaxonName,
+    TaxonRangeBar,
+    Occurrence,
+    PickMarker,
+    PickBracket,
+    PickExtendedBracket,
+    LegendSwatch,
+    LegendText,
+    Frame,
+};
+
+/// The role and the identifier of the datum an item draws (taxon id, event id, sample id).
+struct ItemTag {
+    ItemRole role = ItemRole::None;
+    std::string key;
+};
+
+enum class DashStyle { Solid, Dashed, Dotted };
+
+struct Stroke {
+    Colour colour;
+    double width_mm = 0.25;
+    DashStyle dash = DashStyle::Solid;
+};
+
+/// Area fills drawn as vector line work (never as bitmaps), so SVG and PDF stay sharp.
+/// Limestone follows the brick pattern 627 of FGDC-STD-013-2006 (section 37); the standard has
+/// no reef pattern, so ReefFramework is atollog's own: rows of small open arcs standing for
+/// coral heads.
+enum class FillPattern { None, Limestone, ReefFramework };
+
+struct Rect {
+    RectMm box;
+    std::optional<Colour> fill;              // drawn first
+    FillPattern pattern = FillPattern::None; // drawn over the fill, clipped to the box
+    std::optional<Stroke> stroke;            // outline, drawn last
+    ItemTag tag;
+};
+
+struct Line {
+    PointMm from;
+    PointMm to;
+    Stroke stroke;
+    ItemTag tag;
+};
+
+struct Polyline {
+    std::vector<PointMm> points;
+    Stroke stroke;
+    ItemTag tag;
+};
+
+/// Horizontal placement of a text relative to its anchor, along the (rotated) baseline
+/// direction. Vertically the anchor is the middle of the text's line box.
+enum class TextAnchor { Start, Middle, End };
+enum class FontWeight { Regular, Bold };
+
+struct Text {
+    PointMm anchor_mm;
+    std::string text; // UTF-8
+    TextAnchor anchor = TextAnchor::Start;
+    double size_pt = 8.0;
+    FontWeight weight = FontWeight::Regular;
+    double rotation_deg = 0.0; // clockwise on paper, about the anchor; -90 reads bottom to top
+    Colour colour;
+    ItemTag tag;
+};
+
+enum class MarkerShape { Circle, Square, Diamond, TriangleUp, TriangleDown, HorizontalBar, Tick };
+
+/// A small symbol centred on a point. `hollow` markers are outlined in `colour` with a white
+/// inside, so they stay readable over a bar or a grid line.
+struct Marker {
+    PointMm centre_mm;
+    MarkerShape shape = MarkerShape::Circle;
+    double size_mm = 1.5; // width and height of the symbol's box
+    Colour colour;
+    bool hollow = false;
+    double stroke_mm = 0.25;
+    ItemTag tag;
+};
+
+using DisplayItem = std::variant<Rect, Line, Polyline, Text, Marker>;
+
+/// The scene-space box an item may paint into (text by its estimated extent, markers and
+/// strokes with their line width). Conservative: used for culling, never for layout decisions.
+RectMm itemBounds(const DisplayItem &item);
+const ItemTag &itemTag(const DisplayItem &item);
+
+/// A picture as plain data in paper millimetres, y down: what layouts produce, what tests inspect
+/// and what every backend (PNG, SVG, PDF, the viewer) paints.
+class DisplayList {
+  public:
+    void add(DisplayItem item) { items_.push_back(std::move(item)); }
+    const std::vector<DisplayItem> &items() const { return items_; }
+    std::size_t size() const { return items_.size(); }
+
+    /// The paper the layout asked for; exporters use it as the page. When not set, the union
+    /// of the item bounds is used.
+    void setPage(RectMm page_mm) { page_mm_ = page_mm; }
+    RectMm page() const;
+
+    /// Union of itemBounds over all items; an empty list has an empty box at the origin.
+    RectMm boundingBox() const;
+
+    /// The items with this role, in drawing order (for tests and the viewer's hit tests).
+    std::vector<const DisplayItem *> withRole(ItemRole role) const;
+
+  private:
+    std::vector<DisplayItem> items_;
+    std::optional<RectMm> page_mm_;
+};
+
+} // namespace atollog::draw

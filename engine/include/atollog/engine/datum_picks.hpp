@@ -1,0 +1,75 @@
+#pragma once
+// Datum picks: where each time-scale event (the base or top of a taxon) lies in each hole, as a
+// depth bracket between the extreme sample with the taxon and the next examined sample without
+// it, widened for partial core recovery and, optionally, extended by the range-extension
+// confidence interval.
+#include "atollog/engine/biostrat_settings.hpp"
+#include "atollog/engine/core_dataset.hpp"
+#include "atollog/engine/depth_bracket.hpp"
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace atollog {
+
+struct DatumPick {
+    std::string hole;
+    std::string event;
+    std::string taxon;
+    EventKind kind = EventKind::Base;
+    double age_ma = 0;
+    double age_sd_ma = 0;
+    bool cuttings_hole = false;
+
+    /// False: the taxon has no counted in-place occurrence in the hole ("not found"); the
+    /// members below are then left at their defaults and mean nothing.
+    bool found = false;
+
+    /// The extreme sample with the taxon: the highest for a top, the lowest for a base.
+    std::string found_sample;
+    double found_top_m = 0;
+    double found_base_m = 0;
+    /// The next examined sample without the taxon beyond it (shallower for a top, deeper for a
+    /// base); unset when the pick is open-ended.
+    std::optional<std::string> absent_sample;
+
+    /// From logged depths. Top: [base_m of the absent sample, base_m of the found sample];
+    /// base: [top_m of the found sample, top_m of the absent sample]: everything of the absent
+    /// sample lies beyond the datum, some point of the found sample lies inside its range.
+    DepthBracket plain;
+    /// plain, with each end moved to the farthest true depth its sample may stand for when the
+    /// sample lies in a partly recovered run (DepthModel::trueDepthRange). Logged depths only
+    /// err upward, so only the deep end moves.
+    DepthBracket widened;
+    bool widened_by_recovery = false;
+    /// The taxon is in the shallowest (top) or deepest (base) examined sample of the hole.
+    bool open_ended = false;
+
+    /// The quoted depth (BiostratSettings::depth_quote): the plain bracket's midpoint, or top_m
+    /// or base_m of the found sample. On an open-ended pick the midpoint quote falls back to the
+    /// found sample's edge on the open side, and half_width_m is unset.
+    double depth_m = 0;
+    std::optional<double> half_width_m; ///< midpoint quote on a closed bracket only
+
+    int horizon_count = 0;     ///< distinct levels with the taxon in this hole
+    double observed_range_m = 0; ///< from the highest to the lowest level with the taxon
+    /// Range-extension fraction alpha (Strauss & Sadler 1989); unset when not asked for or
+    /// undefined (fewer than 2 horizons: extension_undefined).
+    std::optional<double> extension_fraction;
+    bool extension_undefined = false;
+    /// widened, extended outward by alpha x observed_range_m (a top upward, clipped at the collar
+    /// 0 m; a base downward); equals widened without an extension.
+    DepthBracket extended;
+
+    /// A base (first occurrence) in a cuttings hole: caving carries younger fossils down the
+    /// hole, so the pick may read too deep (common practice).
+    bool unreliable_cuttings_base = false;
+};
+
+/// A pick for every event of the time scale in every hole, holes in dataset order and events in
+/// time-scale order within a hole. Throws std::invalid_argument on unusable input (as
+/// observeRanges; also a non-finite event age or a negative or non-finite age sd) or settings.
+std::vector<DatumPick> pickDatums(const CoreDataset& data, const BiostratSettings& settings);
+
+} // namespace atollog
