@@ -117,3 +117,22 @@ TEST_CASE("Text width estimate is wide enough for names and numbers", "[draw][fo
         }
     }
 }
+
+TEST_CASE("Limestone fill is a brick bond", "[draw][paint]") {
+    // FGDC-STD-013-2006 pattern 627 (limestone): courses of bricks, joints offset by half a
+    // brick in alternate courses. Here courses are 2 mm high and bricks 4 mm long.
+    DisplayList list;
+    list.add(Rect{{0, 0, 20, 20}, std::nullopt, FillPattern::Limestone, std::nullopt, {}});
+    QImage image = whiteImage(200, 200);
+    {
+        QPainter painter(&image);
+        paintDisplayList(painter, list, {0, 0, 20, 20}, 10.0); // 10 px per mm
+    }
+    const auto dark = [&](int x, int y) { return qGray(image.pixel(x, y)) < 128; };
+    CHECK(dark(30, 40));       // course line at 4 mm
+    CHECK_FALSE(dark(30, 30)); // inside a brick
+    CHECK(dark(40, 10));       // course 0: joint at 4 mm
+    CHECK_FALSE(dark(20, 10));
+    CHECK(dark(20, 30)); // course 1: joints shifted by half a brick, at 2 mm
+    CHECK_FALSE(dark(40, 30));
+}
