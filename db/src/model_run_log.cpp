@@ -63,6 +63,21 @@ std::int64_t ProjectStore::recordModelRun(ModelRunRecord run) {
     }
 }
 
+std::int64_t ProjectStore::recordModelRun(
+    ModelRunRecord run,
+    const std::function<void(SQLite::Database&, std::int64_t run_id)>& write_results) {
+    try {
+        detail::WriteTransaction transaction(*db_);
+        const std::int64_t id = insertModelRun(run);
+        write_results(*db_, id);
+        transaction.commit();
+        return id;
+    } catch (const SQLite::Exception& e) {
+        throw ProjectError("cannot record the " + run.kind + " run and its results in " +
+                           path_.string() + ": " + e.what() + "; the project is unchanged");
+    }
+}
+
 std::vector<ModelRunRecord> ProjectStore::modelRuns() const {
     std::vector<ModelRunRecord> runs;
     SQLite::Statement query(*db_, "SELECT id, kind, settings, seed, program_version, started_utc,"

@@ -207,10 +207,31 @@ CREATE TABLE model_run (
 );
 )sql";
 
+// Version 2: tie points (datum picks with their time-scale ages) stored per model run. They name
+// hole and event by id text rather than by foreign key: they are results of a run on the data as
+// it was (the run's inputs_sha256 says which), and stay as history when the data is replaced.
+constexpr const char* kSchemaV2 = R"sql(
+CREATE TABLE tie_point (
+    id           INTEGER PRIMARY KEY,
+    model_run_id INTEGER NOT NULL REFERENCES model_run(id) ON DELETE CASCADE,
+    hole         TEXT NOT NULL,
+    event        TEXT NOT NULL,
+    kind         TEXT NOT NULL CHECK (kind = 'base' OR kind = 'top'),
+    shallow_m    REAL NOT NULL,
+    deep_m       REAL NOT NULL,
+    depth_m      REAL NOT NULL,
+    age_ma       REAL NOT NULL,
+    age_sd_ma    REAL NOT NULL CHECK (age_sd_ma > 0),
+    flags        TEXT NOT NULL,
+    CHECK (deep_m >= shallow_m AND depth_m >= shallow_m AND depth_m <= deep_m)
+);
+CREATE INDEX tie_point_run ON tie_point(model_run_id);
+)sql";
+
 } // namespace
 
 const std::vector<Migration>& projectMigrations() {
-    static const std::vector<Migration> migrations{{1, kSchemaV1}};
+    static const std::vector<Migration> migrations{{1, kSchemaV1}, {2, kSchemaV2}};
     return migrations;
 }
 

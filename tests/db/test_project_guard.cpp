@@ -177,16 +177,25 @@ TEST_CASE("open accepts statistics tables left by ANALYZE", "[unit]") {
     CHECK(store.loadDataset() == atollog::test::everyFieldDataset());
 }
 
-TEST_CASE("A version 1 project opens at version 1", "[unit]") {
+TEST_CASE("A version 1 project is migrated to the current schema with its data intact",
+          "[unit]") {
     TempPath file("v1");
-    makeProject(file.path());
     {
-        SQLite::Database raw(file.path(), SQLite::OPEN_READONLY);
+        // A file exactly as schema version 1 left it: only the first migration, our id.
+        SQLite::Database raw(file.path(), SQLite::OPEN_READWRITE | SQLite::OPEN_CREATE);
+        SQLite::Transaction t(raw);
+        atollog::db::applyMigrations(raw, {atollog::db::projectMigrations().front()});
+        raw.exec("PRAGMA application_id = " + std::to_string(ProjectStore::kApplicationId));
+        raw.exec("INSERT INTO hole (id, hole, site, kind) VALUES (1, 'MIG-1', 'Old site', 'core')");
+        t.commit();
         REQUIRE(atollog::db::readUserVersion(raw) == 1);
     }
     ProjectStore store = ProjectStore::open(file.path());
-    CHECK(store.schemaVersion() == 1);
     CHECK(store.schemaVersion() == ProjectStore::kSchemaVersion);
+    const auto data = store.loadDataset();
+    REQUIRE(data.holes.size() == 1);
+    CHECK(data.holes[0].hole == "MIG-1");
+    CHECK(store.database().tableExists("tie_point"));
 }
 
 TEST_CASE("The migration list runs 1..kSchemaVersion in order", "[unit]") {
@@ -223,11 +232,11 @@ TEST_CASE("applyMigrations runs only the missing steps and stops at a failing on
     CHECK_FALSE(db.tableExists("tray"));
 }
 
-TEST_CASE("The expected schema of version 1 is what create writes", "[unit]") {
+TEST_CASE("The expected schema of the current version is what create writes", "[unit]") {
     TempPath file("schema");
     ProjectStore store = ProjectStore::create(file.path());
     const auto objects = atollog::db::readSchemaObjects(store.database());
-    CHECK(objects == atollog::db::expectedSchemaObjects(1));
+    CHECK(objects == atollog::db::expectedSchemaObjects(ProjectStore::kSchemaVersion));
     // Every table of the contributor guide's list is there.
     std::vector<std::string> tables;
     for (const auto& o : objects) {
@@ -236,5 +245,5 @@ TEST_CASE("The expected schema of version 1 is what create writes", "[unit]") {
     CHECK(tables == std::vector<std::string>{
                         "calibration_point", "core_run", "free_attribute", "free_column", "hole",
                         "lith_interval", "model_run", "numerical_date", "occurrence", "sample",
-                        "sea_level_point", "taxon", "time_scale_event", "zone"});
+                        "sea_level_point", "taxon", "tie_point", "time_scale_event", "zone"});
 }

@@ -30,7 +30,7 @@ struct ModelRunRecord {
 class ProjectStore {
   public:
     static constexpr std::int32_t kApplicationId = 0x41544C47; // "ATLG"
-    static constexpr int kSchemaVersion = 1;
+    static constexpr int kSchemaVersion = 2;
 
     /// Creates a new, empty project. Throws ProjectError if the file exists.
     static ProjectStore create(const std::filesystem::path& file);
@@ -63,6 +63,11 @@ class ProjectStore {
     std::int64_t rowCount(Table table) const;
 
     std::int64_t recordModelRun(ModelRunRecord run);
+    /// Records the run and lets `write_results` store what it produced (given the database and
+    /// the new run's id) in the same transaction: results never exist without their provenance.
+    std::int64_t recordModelRun(
+        ModelRunRecord run,
+        const std::function<void(SQLite::Database&, std::int64_t run_id)>& write_results);
     std::vector<ModelRunRecord> modelRuns() const;
 
     /// SHA-256 (hex) over a canonical serialisation of the dataset: the inputs hash for runs.
