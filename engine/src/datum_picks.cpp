@@ -165,6 +165,7 @@ std::vector<DatumPick> pickDatums(const CoreDataset& data, const BiostratSetting
             out.push_back(std::move(p));
         }
     }
+    markTruncatedPicks(out, loggedSurfaces(data));
     return out;
 }
 

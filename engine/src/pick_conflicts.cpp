@@ -15,8 +15,21 @@ std::string bracketText(const DepthBracket& b) {
     return derivedNumberText(b.shallow_m) + "-" + derivedNumberText(b.deep_m) + " m";
 }
 
+// Files the contradiction as a conflict or, when a logged surface accounts for it, as a note.
+void file(PickConflict c, const DatumPick& deeper, const DatumPick& shallower,
+          const std::vector<LoggedSurface>& surfaces, PickConflictReport& out) {
+    c.explained_by = explainInversion(deeper, shallower, surfaces);
+    if (c.explained_by) {
+        c.message += "; " + explanationText(*c.explained_by);
+        out.explained.push_back(std::move(c));
+    } else {
+        out.conflicts.push_back(std::move(c));
+    }
+}
+
 void findZoneInversions(const CoreDataset& data, const detail::PickLookup& lookup,
-                        const std::vector<std::string>& holes, std::vector<PickConflict>& out) {
+                        const std::vector<std::string>& holes,
+                        const std::vector<LoggedSurface>& surfaces, PickConflictReport& out) {
     for (const std::string& hole : holes)
         for (const Zone& z : data.zones) {
             if (!z.base_event || !z.top_event)
@@ -38,11 +51,12 @@ void findZoneInversions(const CoreDataset& data, const detail::PickLookup& looku
                         ": its base event '" + *z.base_event + "' is picked at " +
                         bracketText(base->widened) + ", wholly above its top event '" +
                         *z.top_event + "' at " + bracketText(top->widened);
-            out.push_back(std::move(c));
+            file(std::move(c), *base, *top, surfaces, out);
         }
 }
 
-void findOrderConflicts(const std::vector<DatumPick>& picks, std::vector<PickConflict>& out) {
+void findOrderConflicts(const std::vector<DatumPick>& picks,
+                        const std::vector<LoggedSurface>& surfaces, PickConflictReport& out) {
     // Group found picks by hole, keeping the dataset's hole order.
     std::vector<std::string> hole_order;
     std::map<std::string, std::vector<const DatumPick*>> by_hole;
@@ -81,24 +95,30 @@ void findOrderConflicts(const std::vector<DatumPick>& picks, std::vector<PickCon
                             bracketText(younger->widened) + "; the ages differ by " +
                             derivedNumberText(gap_ma) + " Ma, more than 2 sd (" +
                             derivedNumberText(tol_ma) + " Ma)";
-                out.push_back(std::move(c));
+                file(std::move(c), *older, *younger, surfaces, out);
             }
     }
 }
 
 } // namespace
 
-std::vector<PickConflict> findPickConflicts(const CoreDataset& data,
-                                            const std::vector<DatumPick>& picks) {
+PickConflictReport reviewPickConflicts(const CoreDataset& data,
+                                       const std::vector<DatumPick>& picks) {
     detail::requireKnownZoneEvents(data);
+    const std::vector<LoggedSurface> surfaces = loggedSurfaces(data);
     const detail::PickLookup lookup(picks);
     std::vector<std::string> holes;
     for (const Hole& h : data.holes)
         holes.push_back(h.hole);
-    std::vector<PickConflict> out;
-    findZoneInversions(data, lookup, holes, out);
-    findOrderConflicts(picks, out);
+    PickConflictReport out;
+    findZoneInversions(data, lookup, holes, surfaces, out);
+    findOrderConflicts(picks, surfaces, out);
     return out;
+}
+
+std::vector<PickConflict> findPickConflicts(const CoreDataset& data,
+                                            const std::vector<DatumPick>& picks) {
+    return reviewPickConflicts(data, picks).conflicts;
 }
 
 } // namespace atollog

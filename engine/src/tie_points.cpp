@@ -9,9 +9,12 @@ std::vector<TiePoint> makeTiePoints(const std::vector<DatumPick>& picks,
                                     const std::vector<PickConflict>& conflicts,
                                     const BiostratSettings& settings) {
     validateBiostratSettings(settings);
-    std::set<std::pair<std::string, std::string>> in_order_conflict, in_inverted_zone;
+    std::set<std::pair<std::string, std::string>> in_order_conflict, in_inverted_zone,
+        in_explained;
     for (const PickConflict& c : conflicts) {
-        auto& set = c.kind == PickConflictKind::EventOrder ? in_order_conflict : in_inverted_zone;
+        auto& set = c.explained_by                              ? in_explained
+                     : c.kind == PickConflictKind::EventOrder ? in_order_conflict
+                                                              : in_inverted_zone;
         set.emplace(c.hole, c.expected_deeper_event);
         set.emplace(c.hole, c.expected_shallower_event);
     }
@@ -20,6 +23,8 @@ std::vector<TiePoint> makeTiePoints(const std::vector<DatumPick>& picks,
         if (!p.found || p.open_ended)
             continue;
         if (p.unreliable_cuttings_base && !settings.cuttings_bases_as_ties)
+            continue;
+        if (p.truncated_at_basement && !settings.basement_bases_as_ties)
             continue;
         const DepthBracket& b = settings.ties_use_extended_bracket ? p.extended : p.widened;
         TiePoint t;
@@ -44,6 +49,12 @@ std::vector<TiePoint> makeTiePoints(const std::vector<DatumPick>& picks,
             t.flags.emplace_back("order_conflict");
         if (in_inverted_zone.count(key))
             t.flags.emplace_back("zone_inverted");
+        if (in_explained.count(key))
+            t.flags.emplace_back("explained_inversion");
+        if (p.truncated_at_surface)
+            t.flags.emplace_back("at_surface");
+        if (p.truncated_at_basement)
+            t.flags.emplace_back("at_basement");
         out.push_back(std::move(t));
     }
     return out;

@@ -1,5 +1,6 @@
 #include "atollog/engine/zone_assignment.hpp"
 
+#include "atollog/engine/inversion_explanation.hpp"
 #include "atollog/engine/number_text.hpp"
 
 #include "pick_lookup.hpp"
@@ -48,12 +49,54 @@ EdgeState edgeState(const detail::PickLookup& lookup, const std::string& hole,
     return s;
 }
 
-bool zoneInverted(const detail::PickLookup& lookup, const std::string& hole, const Zone& z) {
+// Inverted and not explained by a logged surface (explainInversion).
+bool zoneInverted(const detail::PickLookup& lookup, const std::string& hole, const Zone& z,
+                  const std::vector<LoggedSurface>& surfaces) {
     if (!z.base_event || !z.top_event)
         return false;
     const DatumPick* base = lookup.find(hole, *z.base_event);
     const DatumPick* top = lookup.find(hole, *z.top_event);
-    return base && top && base->found && top->found && base->widened.whollyAbove(top->widened);
+    return base && top && base->found && top->found && base->widened.whollyAbove(top->widened) &&
+           !explainInversion(*base, *top, surfaces);
+}
+
+const DatumPick* foundPick(const detail::PickLookup& lookup, const std::string& hole,
+                           const std::optional<std::string>& event) {
+    const DatumPick* p = event ? lookup.find(hole, *event) : nullptr;
+    return p && p->found ? p : nullptr;
+}
+
+// Two zones hold a sample when the older zone's top pick lies at or above it and the younger
+// zone's base pick at or below it: the pair is out of order around the sample. When a logged
+// surface explains that pair (explainInversion), the sample belongs to the rock on its side of
+// the surface: above it, the younger zone; at or below it (a sample starting at the surface lies
+// in the rock under it), the older zone. Bases truncated at the basement lie below every sample,
+// so the younger zone holds it. Returns the zones left; unexplained pairs stay.
+std::vector<const Zone*> dropExplainedHoldings(const std::vector<const Zone*>& holding,
+                                               const detail::PickLookup& lookup,
+                                               const std::vector<LoggedSurface>& surfaces,
+                                               const Sample& s) {
+    std::vector<char> dropped(holding.size(), 0);
+    for (std::size_t i = 0; i < holding.size(); ++i)
+        for (std::size_t j = 0; j < holding.size(); ++j) {
+            if (i == j)
+                continue;
+            const DatumPick* older_top = foundPick(lookup, s.hole, holding[i]->top_event);
+            const DatumPick* younger_base = foundPick(lookup, s.hole, holding[j]->base_event);
+            if (!older_top || !younger_base || !(older_top->age_ma > younger_base->age_ma))
+                continue;
+            const auto why = explainInversion(*older_top, *younger_base, surfaces);
+            if (!why)
+                continue;
+            const bool in_younger_rock = why->cause == InversionCause::BasementTruncation ||
+                                         s.top_m < why->surface.depth_m;
+            dropped[in_younger_rock ? i : j] = 1;
+        }
+    std::vector<const Zone*> kept;
+    for (std::size_t i = 0; i < holding.size(); ++i)
+        if (!dropped[i])
+            kept.push_back(holding[i]);
+    return kept;
 }
 
 std::string bracketText(const DepthBracket& b) {
@@ -62,7 +105,7 @@ std::string bracketText(const DepthBracket& b) {
 }
 
 SampleZoneCall callSample(const std::vector<const Zone*>& zones, const detail::PickLookup& lookup,
-                          const Sample& s) {
+                          const std::vector<LoggedSurface>& surfaces, const Sample& s) {
     SampleZoneCall call;
     call.hole = s.hole;
     call.sample = s.sample;
@@ -88,13 +131,15 @@ SampleZoneCall callSample(const std::vector<const Zone*>& zones, const detail::P
                                   " of zone " + z->zone + ") is not picked in hole " + s.hole;
         }
     }
+    if (holding.size() > 1)
+        holding = dropExplainedHoldings(holding, lookup, surfaces, s);
     if (holding.size() > 1) {
         call.call = ZoneCall::ConflictingPicks;
         call.reason = "zones";
         for (std::size_t i = 0; i < holding.size(); ++i)
             call.reason += (i ? ", " : " ") + holding[i]->zone;
         call.reason += " all hold the sample: their picks overlap or are out of order";
-    } else if (holding.size() == 1 && zoneInverted(lookup, s.hole, *holding.front())) {
+    } else if (holding.size() == 1 && zoneInverted(lookup, s.hole, *holding.front(), surfaces)) {
         call.call = ZoneCall::ConflictingPicks;
         call.reason = "zone " + holding.front()->zone + " is inverted in hole " + s.hole +
                       ": its base pick lies wholly above its top pick";
@@ -140,6 +185,7 @@ ZoneReport assignZones(const CoreDataset& data, const std::vector<DatumPick>& pi
                                         s.hole + "' has a non-finite top_m " +
                                         numberText(s.top_m));
     const detail::PickLookup lookup(picks);
+    const std::vector<LoggedSurface> surfaces = loggedSurfaces(data);
 
     std::vector<std::string> schemes;
     std::map<std::string, std::vector<const Zone*>> zones_of;
@@ -182,7 +228,7 @@ ZoneReport assignZones(const CoreDataset& data, const std::vector<DatumPick>& pi
                     report.boundaries.push_back(std::move(b));
                 }
             for (const Sample* s : samples_of[h.hole]) {
-                SampleZoneCall call = callSample(zones, lookup, *s);
+                SampleZoneCall call = callSample(zones, lookup, surfaces, *s);
                 call.scheme = scheme;
                 report.samples.push_back(std::move(call));
             }

@@ -17,11 +17,13 @@ struct BiostratResult {
     std::vector<ObservedRange> ranges;
     std::vector<DatumPick> picks;
     ZoneReport zones;
-    std::vector<PickConflict> conflicts;
+    std::vector<PickConflict> conflicts;           ///< unexplained: faults to look at
+    std::vector<PickConflict> explained_conflicts; ///< explained by a logged surface: notes
     std::vector<TiePoint> ties;
 };
 
-/// observeRanges, pickDatums, assignZones, findPickConflicts and makeTiePoints in turn. Throws
+/// observeRanges, pickDatums, assignZones, reviewPickConflicts and makeTiePoints (given both the
+/// conflicts and the explained notes) in turn. Throws
 /// std::invalid_argument as they do.
 BiostratResult runBiostratigraphy(const CoreDataset& data, const BiostratSettings& settings);
 

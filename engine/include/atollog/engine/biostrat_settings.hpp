@@ -39,6 +39,11 @@ struct BiostratSettings {
     /// (common practice).
     bool cuttings_bases_as_ties = false;
 
+    /// Tie points from bases truncated at the basement (DatumPick::truncated_at_basement). Off by
+    /// default: the taxon may have lived before the reef began, so the event's age is only an
+    /// old bound of the rock at the pick, not its age.
+    bool basement_bases_as_ties = false;
+
     /// Tie points carry the extended bracket (range-extension confidence) instead of the plain
     /// one widened for partial recovery. Needs range_extension_confidence.
     bool ties_use_extended_bracket = false;

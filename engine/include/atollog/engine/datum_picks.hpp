@@ -6,6 +6,7 @@
 #include "atollog/engine/biostrat_settings.hpp"
 #include "atollog/engine/core_dataset.hpp"
 #include "atollog/engine/depth_bracket.hpp"
+#include "atollog/engine/logged_surfaces.hpp"
 
 #include <optional>
 #include <string>
@@ -65,11 +66,44 @@ struct DatumPick {
     /// A base (first occurrence) in a cuttings hole: caving carries younger fossils down the
     /// hole, so the pick may read too deep (common practice).
     bool unreliable_cuttings_base = false;
+
+    /// Truncation by a logged surface (logged_surfaces.hpp), set by markTruncatedPicks.
+    /// surfaces_at_pick: the surfaces of the hole that lie in the closed widened bracket
+    /// [shallow_m, deep_m], ends included, shallowest first; an open side is not searched beyond
+    /// its last known depth (it bounds nothing). truncated_at_surface: that list is not empty.
+    /// Why: a surface may stand for missing time, and a datum whose age falls in that time is
+    /// squeezed onto it, a base (first occurrence) found just above it and a top (last
+    /// occurrence) just below (Shaw 1964: a dog-leg in the line of correlation marks a hiatus).
+    /// The depth is then right, but the rock at the pick may be younger (base) or older (top)
+    /// than the event by up to the missing time.
+    bool truncated_at_surface = false;
+    std::vector<LoggedSurface> surfaces_at_pick;
+    /// A base (first occurrence) in a hole with a logged basement contact whose true datum may
+    /// lie at or below the floor of the carbonate section: no carbonate below records an older
+    /// first occurrence, so the taxon may have lived before the reef began. Either
+    /// (a) its widened bracket reaches the contact (deep_m at or below it) or is open below (no
+    ///     examined sample deeper), or
+    /// (b) its age is at or above the age of a base of the same hole marked by (a): that taxon
+    ///     was living when the deepest examined carbonate formed, so a first occurrence at least
+    ///     as old lies at or below it as well, and the lowest find of this taxon only shows
+    ///     where sampling first met it.
+    /// The event's age is then only an old bound of the rock at the pick, and the pick's depth
+    /// says nothing about the datum's depth. Tops are never truncated at the basement (a last
+    /// occurrence above the floor is recorded in full). An unflagged caved find in the deepest
+    /// sample would mark too many bases by (b): caving is a fault to flag in the data.
+    bool truncated_at_basement = false;
+    std::optional<double> basement_contact_m; ///< the hole's basement contact, when logged
 };
 
 /// A pick for every event of the time scale in every hole, holes in dataset order and events in
-/// time-scale order within a hole. Throws std::invalid_argument on unusable input (as
+/// time-scale order within a hole, marked for truncation by the logged surfaces of the data
+/// (loggedSurfaces, markTruncatedPicks). Throws std::invalid_argument on unusable input (as
 /// observeRanges; also a non-finite event age or a negative or non-finite age sd) or settings.
 std::vector<DatumPick> pickDatums(const CoreDataset& data, const BiostratSettings& settings);
+
+/// Sets truncated_at_surface, surfaces_at_pick, truncated_at_basement and basement_contact_m
+/// of every found pick from the surfaces of its hole (see the members for the rule). Picks
+/// already marked are marked afresh. Throws std::invalid_argument on a non-finite surface depth.
+void markTruncatedPicks(std::vector<DatumPick>& picks, const std::vector<LoggedSurface>& surfaces);
 
 } // namespace atollog

@@ -1,10 +1,14 @@
 #pragma once
 // Picks that contradict each other or the time scale. A conflict means a fault in the data
 // (mislabelled depth, unflagged reworking or caving, a misidentified taxon) or in the time scale,
-// and the picks involved should not be trusted as tie points without a look.
+// and the picks involved should not be trusted as tie points without a look. A contradiction that
+// a logged surface accounts for (inversion_explanation.hpp: a hiatus squeezing a base and a top
+// onto it, bases truncated at the basement) is no fault: it is kept apart as an explained note.
 #include "atollog/engine/core_dataset.hpp"
 #include "atollog/engine/datum_picks.hpp"
+#include "atollog/engine/inversion_explanation.hpp"
 
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -29,18 +33,33 @@ struct PickConflict {
     double age_gap_ma = 0;   ///< EventOrder: age(deeper) - age(shallower), > 0
     double tolerance_ma = 0; ///< EventOrder: 2 sqrt(sd1^2 + sd2^2)
     std::string message;
+    /// Set when a logged surface accounts for the contradiction (explainInversion with the
+    /// expected deeper event as `older`): then it is a note, not a fault, and the message says so.
+    std::optional<InversionExplanation> explained_by;
 };
 
-/// Conflicts of all found picks, hole by hole. Brackets are the widened ones (partial recovery
-/// included), so a conflict is reported only when recovery cannot explain it; an open side never
-/// conflicts.
+struct PickConflictReport {
+    std::vector<PickConflict> conflicts; ///< unexplained: faults to look at
+    std::vector<PickConflict> explained; ///< explained by a logged surface: lower-severity notes
+};
+
+/// Contradictions of all found picks, hole by hole, each either a conflict or an explained note.
+/// Brackets are the widened ones (partial recovery included), so a contradiction is reported
+/// only when recovery cannot explain it; an open side never contradicts.
 /// - ZoneInverted: zone base pick wholly above its top pick (Salvador 1994: an interval zone lies
 ///   between its lower and upper biohorizon).
 /// - EventOrder: event a older than event b (age_a > age_b) but a's bracket lies wholly above
 ///   b's, and age_a - age_b > 2 sqrt(sd_a^2 + sd_b^2): the ages differ by more than about two
 ///   standard deviations of their difference (independent normal errors), so the time scale
 ///   alone cannot put them in the observed order.
-/// Throws std::invalid_argument on a zone that names an unknown event.
+/// Either kind goes to `explained` when explainInversion(deeper pick, shallower pick, the
+/// logged surfaces of the data) gives an explanation (a base above and a top below a logged
+/// surface, or two bases truncated at the basement), and to `conflicts` otherwise.
+/// Throws std::invalid_argument on a zone that names an unknown event, or as loggedSurfaces.
+PickConflictReport reviewPickConflicts(const CoreDataset& data,
+                                       const std::vector<DatumPick>& picks);
+
+/// reviewPickConflicts(data, picks).conflicts: the contradictions no logged surface explains.
 std::vector<PickConflict> findPickConflicts(const CoreDataset& data,
                                             const std::vector<DatumPick>& picks);
 

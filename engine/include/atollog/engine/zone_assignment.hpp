@@ -58,11 +58,17 @@ struct ZoneReport {
 /// every hole. A sample at level d lies in a zone when it is at or below the deep end of the
 /// zone's top boundary bracket and at or above the shallow end of its base boundary bracket
 /// (an edge without an event is open). Plain brackets decide, because they are built from the
-/// examined samples themselves: each examined sample falls on one side of every pick. Exactly
-/// one such zone, not inverted in the hole, assigns the sample; otherwise the call says why not,
+/// examined samples themselves: each examined sample falls on one side of every pick. When two
+/// zones hold a sample because the older zone's top event and the younger zone's base event are
+/// out of order around it, and a logged surface explains that pair (explainInversion: a hiatus
+/// squeezing a base and a top onto the surface, or two bases truncated at the basement), the
+/// sample keeps only the zone on its side of the surface: the younger above it, the older at or
+/// below it (the younger one for basement truncation); the zone between the pair's events then
+/// lies in the missing time. Exactly one zone left, not inverted in the hole (inversions a
+/// logged surface explains do not count), assigns the sample; otherwise the call says why not,
 /// in this order: several zones or an inverted zone (ConflictingPicks), a boundary bracket around
 /// the sample, a boundary event not found. Throws std::invalid_argument on a zone naming an
-/// unknown event, or on samples as observeRanges does.
+/// unknown event, or on samples as observeRanges does, or as loggedSurfaces.
 ZoneReport assignZones(const CoreDataset& data, const std::vector<DatumPick>& picks);
 
 } // namespace atollog
