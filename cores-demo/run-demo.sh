@@ -18,4 +18,14 @@ run import "$project" cores-demo/archipelago
 # check exits 1 when it reports anything; the demo carries a few deliberate warnings.
 run check "$project" || [ $? -eq 1 ]
 run show "$project"
+# Biostratigraphy: observed ranges, datum picks (stored as tie points), zones and conflicts.
+run ranges "$project"
+run datums "$project" --extend 0.95
+run zones "$project"
+run zones "$project" --by conflict
+for hole in KAL1 TOR1 OSS1 PEL1; do
+    run chart "$project" --hole "$hole" --extend 0.95 --out "build/demo-range-chart-$hole.png"
+done
+run chart "$project" --hole TOR1 --extend 0.95 --out build/demo-range-chart-TOR1.svg
+run chart "$project" --hole TOR1 --extend 0.95 --page a4 --out build/demo-range-chart-TOR1.pdf
 run history "$project"

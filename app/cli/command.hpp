@@ -27,5 +27,9 @@ CommandRun addExportCommand(CLI::App& app, const CommandIo& io);
 CommandRun addCheckCommand(CLI::App& app, const CommandIo& io);
 CommandRun addShowCommand(CLI::App& app, const CommandIo& io);
 CommandRun addHistoryCommand(CLI::App& app, const CommandIo& io);
+CommandRun addRangesCommand(CLI::App& app, const CommandIo& io);
+CommandRun addDatumsCommand(CLI::App& app, const CommandIo& io);
+CommandRun addZonesCommand(CLI::App& app, const CommandIo& io);
+CommandRun addChartCommand(CLI::App& app, const CommandIo& io);
 
 } // namespace atollog::cli

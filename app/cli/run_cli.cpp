@@ -38,6 +38,10 @@ int runCli(int argc, const char* const* argv, std::ostream& out, std::ostream& e
     add(addExportCommand);
     add(addCheckCommand);
     add(addShowCommand);
+    add(addRangesCommand);
+    add(addDatumsCommand);
+    add(addZonesCommand);
+    add(addChartCommand);
     add(addHistoryCommand);
 
     try {

@@ -3,6 +3,7 @@
 #include "atollog/db/csv_reader.hpp"
 
 #include <algorithm>
+#include <charconv>
 #include <cstdio>
 #include <ostream>
 #include <stdexcept>
@@ -66,6 +67,13 @@ std::string formatFixed(double value, int decimals) {
         if (s.find_first_not_of("-0.") == std::string::npos) s.erase(0, 1);
     }
     return s;
+}
+
+std::string formatNumber(double value, bool csv, int decimals) {
+    if (!csv) return formatFixed(value, decimals);
+    char buf[64];
+    const auto result = std::to_chars(buf, buf + sizeof buf, value);
+    return std::string(buf, result.ptr);
 }
 
 } // namespace atollog::cli

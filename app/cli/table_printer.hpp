@@ -30,4 +30,8 @@ class TablePrinter {
 /// Fixed-point text for tables: formatFixed(12.345, 2) == "12.35".
 std::string formatFixed(double value, int decimals);
 
+/// A number for a table cell: shortest round-trip form in CSV (programs read it back exactly),
+/// fixed `decimals` in the aligned text form (people read it).
+std::string formatNumber(double value, bool csv, int decimals);
+
 } // namespace atollog::cli
