@@ -228,10 +228,64 @@ CREATE TABLE tie_point (
 CREATE INDEX tie_point_run ON tie_point(model_run_id);
 )sql";
 
+// Version 3: age-depth model results per model run and hole: the age quantiles on the depth grid
+// and at every sample, each hiatus's duration, accretion rates, and the run's acceptance and
+// most likely outlier tie. Like tie points they name holes by id text: results of a run on the
+// data as it was.
+constexpr const char* kSchemaV3 = R"sql(
+CREATE TABLE age_model_hole (
+    id               INTEGER PRIMARY KEY,
+    model_run_id     INTEGER NOT NULL REFERENCES model_run(id) ON DELETE CASCADE,
+    hole             TEXT NOT NULL,
+    tie_count        INTEGER NOT NULL CHECK (tie_count >= 0),
+    draws            INTEGER NOT NULL CHECK (draws > 0),
+    acceptance_rate  REAL NOT NULL CHECK (acceptance_rate >= 0 AND acceptance_rate <= 1),
+    outlier_tie      TEXT,
+    UNIQUE (model_run_id, hole)
+);
+CREATE TABLE age_model_point (
+    id              INTEGER PRIMARY KEY,
+    age_model_id    INTEGER NOT NULL REFERENCES age_model_hole(id) ON DELETE CASCADE,
+    depth_m         REAL NOT NULL,
+    sample          TEXT,
+    age_q025_ma     REAL NOT NULL,
+    age_q500_ma     REAL NOT NULL,
+    age_q975_ma     REAL NOT NULL,
+    age_mean_ma     REAL NOT NULL,
+    CHECK (age_q025_ma <= age_q500_ma AND age_q500_ma <= age_q975_ma)
+);
+CREATE INDEX age_model_point_model ON age_model_point(age_model_id);
+CREATE TABLE age_model_hiatus (
+    id                   INTEGER PRIMARY KEY,
+    age_model_id         INTEGER NOT NULL REFERENCES age_model_hole(id) ON DELETE CASCADE,
+    depth_m              REAL NOT NULL,
+    duration_q025_ma     REAL NOT NULL,
+    duration_q500_ma     REAL NOT NULL,
+    duration_q975_ma     REAL NOT NULL,
+    probability_positive REAL NOT NULL CHECK (probability_positive >= 0 AND probability_positive <= 1),
+    CHECK (duration_q025_ma <= duration_q500_ma AND duration_q500_ma <= duration_q975_ma)
+);
+CREATE INDEX age_model_hiatus_model ON age_model_hiatus(age_model_id);
+CREATE TABLE age_model_rate (
+    id                  INTEGER PRIMARY KEY,
+    age_model_id        INTEGER NOT NULL REFERENCES age_model_hole(id) ON DELETE CASCADE,
+    label               TEXT NOT NULL,
+    top_m               REAL NOT NULL,
+    base_m              REAL NOT NULL,
+    rate_q025_m_per_myr REAL NOT NULL,
+    rate_q500_m_per_myr REAL NOT NULL,
+    rate_q975_m_per_myr REAL NOT NULL,
+    flags               TEXT NOT NULL,
+    CHECK (base_m > top_m),
+    CHECK (rate_q025_m_per_myr <= rate_q500_m_per_myr AND rate_q500_m_per_myr <= rate_q975_m_per_myr)
+);
+CREATE INDEX age_model_rate_model ON age_model_rate(age_model_id);
+)sql";
+
 } // namespace
 
 const std::vector<Migration>& projectMigrations() {
-    static const std::vector<Migration> migrations{{1, kSchemaV1}, {2, kSchemaV2}};
+    static const std::vector<Migration> migrations{{1, kSchemaV1}, {2, kSchemaV2}, {3, kSchemaV3}};
     return migrations;
 }
 
