@@ -26,6 +26,11 @@ void requireUsable(const CoreRun &r) {
     if (!(r.base_m > r.top_m))
         throw std::invalid_argument("DepthModel: " + runLabel(r) +
                                     ": base_m must be deeper (larger) than top_m");
+    // Finite ends can still be so far apart that the length overflows to infinity, which would
+    // make every recovery figure of the hole infinite or zero.
+    if (!std::isfinite(r.cored_m()))
+        throw std::invalid_argument("DepthModel: " + runLabel(r) +
+                                    ": the cored length is too large to compute; check the depths");
     if (r.recovered_m < 0.0)
         throw std::invalid_argument("DepthModel: " + runLabel(r) + ": recovered_m " +
                                     numberText(r.recovered_m) + " is negative; give 0 or more");

@@ -69,7 +69,9 @@ std::vector<HoleSummary> summarizeHoles(const CoreDataset &data) {
         HoleSummary *s = find(v.hole);
         if (!s)
             continue;
-        if (!std::isfinite(v.top_m) || !std::isfinite(v.base_m) || !(v.base_m > v.top_m))
+        // The thickness itself must be finite too: finite ends far enough apart overflow.
+        if (!std::isfinite(v.top_m) || !std::isfinite(v.base_m) || !(v.base_m > v.top_m) ||
+            !std::isfinite(v.thickness_m()))
             refuse(Table::Intervals, i,
                    "interval " + numberText(v.top_m) + "-" + numberText(v.base_m) + " m of hole " +
                        v.hole + " has no positive finite thickness");

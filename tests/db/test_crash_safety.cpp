@@ -57,22 +57,26 @@ void importReplacing(const std::filesystem::path& project, const std::filesystem
 
 TEST_CASE("A project killed during an import holds the old or the new dataset, whole",
           "[slow][crash]") {
-    TempPath old_folder("crash-old-folder");
+    // The old dataset is the minimal good folder; the new one adds to it, in its hole TV-1
+    // (cored 0-9 m), 1,000 samples x 100 taxa = 100,000 occurrences: an import of a few
+    // tenths of a second.
+    const std::filesystem::path old_folder =
+        std::filesystem::path(ATOLLOG_TEST_DATA_DIR) / "good-input" / "minimal";
     TempPath new_folder("crash-new-folder");
     TempPath pristine("crash-pristine");
     TempPath work("crash-work");
 
-    // 1,000 samples x 100 taxa = 100,000 occurrences: an import of a few tenths of a second.
-    atollog::db::writeCoreFolder(atollog::test::everyFieldDataset(), old_folder.path());
-    atollog::db::writeCoreFolder(atollog::test::largeDataset(1000, 100, "N"), new_folder.path());
-    const std::string old_hash =
-        ProjectStore::datasetHash(atollog::db::readCoreFolder(old_folder.path()));
+    const atollog::CoreDataset old_data = atollog::db::readCoreFolder(old_folder);
+    atollog::db::writeCoreFolder(
+        atollog::test::largeDataset(old_data, "TV-1", 0.0, 8.0, 1000, 100, "N"),
+        new_folder.path());
+    const std::string old_hash = ProjectStore::datasetHash(old_data);
     const std::string new_hash =
         ProjectStore::datasetHash(atollog::db::readCoreFolder(new_folder.path()));
     REQUIRE(old_hash != new_hash);
     {
         ProjectStore store = ProjectStore::create(pristine.path());
-        atollog::db::importCoreFolder(store, old_folder.path());
+        atollog::db::importCoreFolder(store, old_folder);
     }
 
     // One uninterrupted run: how long a whole import takes, and that it stores the new data.

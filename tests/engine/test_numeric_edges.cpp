@@ -103,6 +103,7 @@ TEST_CASE("classifyTexture refuses non-finite percentages by name", "[unit]") {
         CHECK_THROWS_AS(possibleTextures(coarse), std::invalid_argument);
     }
     TextureAttributes zero; // 0 % is a value, not "missing"
+    zero.binding = Binding::None;
     zero.coarse_pct = 0.0;
     zero.mud_supported = true;
     zero.grains_pct = 0.0;
