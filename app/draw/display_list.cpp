@@ -59,6 +59,9 @@ RectMm itemBounds(const DisplayItem &item) {
         RectMm operator()(const Polyline &p) const {
             return boxOfPoints(p.points).grown(p.stroke.width_mm / 2);
         }
+        RectMm operator()(const Polygon &p) const {
+            return boxOfPoints(p.points).grown(p.stroke ? p.stroke->width_mm / 2 : 0.0);
+        }
         RectMm operator()(const Text &t) const { return textBounds(t); }
         RectMm operator()(const Marker &m) const {
             const double half = m.size_mm / 2 + m.stroke_mm;

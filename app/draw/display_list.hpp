@@ -30,6 +30,19 @@ enum class ItemRole {
     LegendSwatch,
     LegendText,
     Frame,
+    // Age-depth plot (keys: tie label for ties, hiatus depth "%.2f" for hiatuses).
+    AgeAxis,
+    AgeTick,
+    AgeLabel,
+    AgeEnvelope, // the 95 % band: one filled polygon with its outline (key "band")
+    AgeMedian,
+    AgeTieMarker,
+    AgeTieBar,     // depth bracket (vertical) and age range (horizontal) of a tie
+    AgeTieLabel,   // a tie's label, and the leader to it when it had to move
+    AgeTieOutlier, // the ring around a tie singled out by the leave-one-out check
+    Hiatus,
+    HiatusLabel,
+    ReferenceLine,
 };
 
 /// The role and the identifier of the datum an item draws (taxon id, event id, sample id).
@@ -73,6 +86,15 @@ struct Polyline {
     ItemTag tag;
 };
 
+/// A closed area filled with one colour (e.g. an uncertainty band), with an optional outline.
+/// The last point joins the first.
+struct Polygon {
+    std::vector<PointMm> points;
+    Colour fill;
+    std::optional<Stroke> stroke;
+    ItemTag tag;
+};
+
 /// Horizontal placement of a text relative to its anchor, along the (rotated) baseline
 /// direction. Vertically the anchor is the middle of the text's line box.
 enum class TextAnchor { Start, Middle, End };
@@ -103,7 +125,7 @@ struct Marker {
     ItemTag tag;
 };
 
-using DisplayItem = std::variant<Rect, Line, Polyline, Text, Marker>;
+using DisplayItem = std::variant<Rect, Line, Polyline, Polygon, Text, Marker>;
 
 /// The scene-space box an item may paint into (text by its estimated extent, markers and
 /// strokes with their line width). Conservative: used for culling, never for layout decisions.

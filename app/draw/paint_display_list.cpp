@@ -91,6 +91,21 @@ void paintPolyline(QPainter &p, const Polyline &l) {
     strokePolyline(p, l.points, l.stroke);
 }
 
+void paintPolygon(QPainter &p, const Polygon &g) {
+    QPolygonF poly;
+    for (const PointMm &pt : g.points) {
+        poly << toQPoint(pt);
+    }
+    p.setPen(Qt::NoPen);
+    p.setBrush(toQColor(g.fill));
+    p.drawPolygon(poly, Qt::OddEvenFill);
+    if (g.stroke && !g.points.empty()) {
+        std::vector<PointMm> closed = g.points;
+        closed.push_back(g.points.front());
+        strokePolyline(p, closed, *g.stroke);
+    }
+}
+
 QPainterPath markerPath(const Marker &m) {
     const double h = m.size_mm / 2;
     const double x = m.centre_mm.x_mm, y = m.centre_mm.y_mm;
@@ -198,6 +213,8 @@ PaintStats paintDisplayList(QPainter &painter, const DisplayList &list, const Re
                     paintLine(painter, i);
                 } else if constexpr (std::is_same_v<T, Polyline>) {
                     paintPolyline(painter, i);
+                } else if constexpr (std::is_same_v<T, Polygon>) {
+                    paintPolygon(painter, i);
                 } else if constexpr (std::is_same_v<T, Text>) {
                     paintText(painter, i, family);
                 } else {
