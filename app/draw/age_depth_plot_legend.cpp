@@ -1,6 +1,7 @@
 #include "draw/age_depth_plot_legend.hpp"
 
 #include "draw/age_depth_plot_symbols.hpp"
+#include "draw/legend_rows.hpp"
 #include "draw/text_extent.hpp"
 
 #include <algorithm>
@@ -17,57 +18,6 @@ namespace {
 constexpr double kSwatchWidth_mm = 6.0;
 constexpr double kTextGap_mm = 2.0;
 
-/// Rows of swatch + text under bold block headings, like the range chart's legend.
-class LegendRows {
-  public:
-    LegendRows(DisplayList &list, PointMm top_left, const AgeDepthPlotStyle &style)
-        : list_(list), left_(top_left.x_mm), y_(top_left.y_mm), style_(style),
-          right_(top_left.x_mm) {}
-
-    void heading(const std::string &text) {
-        if (rows_ > 0) {
-            y_ += style_.legend_row_mm * 0.5; // a half row between blocks
-        }
-        placeText(text, left_, FontWeight::Bold);
-        y_ += style_.legend_row_mm;
-        ++rows_;
-    }
-
-    /// One row: `draw_swatch` gets the swatch's centre and adds its items; then the label.
-    void row(const std::string &label, const std::function<void(PointMm)> &draw_swatch) {
-        draw_swatch({left_ + kSwatchWidth_mm / 2, y_ + style_.legend_row_mm / 2});
-        placeText(label, left_ + kSwatchWidth_mm + kTextGap_mm, FontWeight::Regular);
-        y_ += style_.legend_row_mm;
-        ++rows_;
-    }
-
-    RectMm box(PointMm top_left) const {
-        if (rows_ == 0) {
-            return RectMm{top_left.x_mm, top_left.y_mm, 0, 0};
-        }
-        return RectMm{top_left.x_mm, top_left.y_mm, right_ - top_left.x_mm, y_ - top_left.y_mm};
-    }
-
-  private:
-    void placeText(const std::string &text, double x_mm, FontWeight weight) {
-        list_.add(Text{{x_mm, y_ + style_.legend_row_mm / 2},
-                       text,
-                       TextAnchor::Start,
-                       style_.label_size_pt,
-                       weight,
-                       0.0,
-                       sym::kInk,
-                       {ItemRole::LegendText, text}});
-        right_ = std::max(right_, x_mm + estimateTextWidth_mm(text, style_.label_size_pt, weight));
-    }
-
-    DisplayList &list_;
-    double left_;
-    double y_;
-    const AgeDepthPlotStyle &style_;
-    double right_;
-    int rows_ = 0;
-};
 
 ItemTag swatchTag(const std::string &what) {
     return {ItemRole::LegendSwatch, what};
@@ -93,7 +43,9 @@ std::vector<PointMm> outlierRing(PointMm centre, double marker_mm) {
 
 RectMm appendAgeDepthLegend(DisplayList &list, const AgeDepthLegendContent &c, PointMm top_left,
                             const AgeDepthPlotStyle &style) {
-    LegendRows rows(list, top_left, style);
+    LegendRows rows(
+        list, top_left,
+        {style.legend_row_mm, style.label_size_pt, kSwatchWidth_mm, kTextGap_mm, sym::kInk});
     const double half = kSwatchWidth_mm / 2;
     const auto line = [&list, half](Colour colour, double width_mm, DashStyle dash,
                                     const std::string &what) {

@@ -2,6 +2,7 @@
 
 #include "draw/group_palette.hpp"
 #include "draw/range_chart_symbols.hpp"
+#include "draw/legend_rows.hpp"
 #include "draw/text_extent.hpp"
 
 #include <algorithm>
@@ -17,59 +18,6 @@ namespace {
 constexpr double kSwatchWidth_mm = 5.0;
 constexpr double kTextGap_mm = 2.0;
 
-class LegendWriter {
-  public:
-    LegendWriter(DisplayList &list, PointMm top_left, const RangeChartStyle &style)
-        : list_(list), left_(top_left.x_mm), y_(top_left.y_mm), style_(style),
-          right_(top_left.x_mm) {}
-
-    void heading(const std::string &text) {
-        if (rows_ > 0) {
-            y_ += style_.legend_row_mm * 0.5; // a half row between blocks
-        }
-        placeText(text, left_, FontWeight::Bold);
-        y_ += style_.legend_row_mm;
-        ++rows_;
-    }
-
-    /// One row: `draw_swatch` gets the swatch's centre and adds its items; then the label.
-    void row(const std::string &label, const std::function<void(PointMm)> &draw_swatch) {
-        const PointMm centre{left_ + kSwatchWidth_mm / 2, y_ + style_.legend_row_mm / 2};
-        draw_swatch(centre);
-        placeText(label, left_ + kSwatchWidth_mm + kTextGap_mm, FontWeight::Regular);
-        y_ += style_.legend_row_mm;
-        ++rows_;
-    }
-
-    RectMm box(PointMm top_left) const {
-        if (rows_ == 0) {
-            return RectMm{top_left.x_mm, top_left.y_mm, 0, 0};
-        }
-        return RectMm{top_left.x_mm, top_left.y_mm, right_ - top_left.x_mm, y_ - top_left.y_mm};
-    }
-
-    DisplayList &list() { return list_; }
-
-  private:
-    void placeText(const std::string &text, double x_mm, FontWeight weight) {
-        list_.add(Text{{x_mm, y_ + style_.legend_row_mm / 2},
-                       text,
-                       TextAnchor::Start,
-                       style_.label_size_pt,
-                       weight,
-                       0.0,
-                       cs::kInk,
-                       {ItemRole::LegendText, text}});
-        right_ = std::max(right_, x_mm + estimateTextWidth_mm(text, style_.label_size_pt, weight));
-    }
-
-    DisplayList &list_;
-    double left_;
-    double y_;
-    const RangeChartStyle &style_;
-    double right_;
-    int rows_ = 0;
-};
 
 ItemTag swatchTag(const std::string &what) {
     return {ItemRole::LegendSwatch, what};
@@ -90,7 +38,9 @@ void bracketSwatch(DisplayList &list, PointMm c, DashStyle dash, const std::stri
 
 RectMm appendRangeChartLegend(DisplayList &list, const RangeChartLegendContent &c, PointMm top_left,
                               const RangeChartStyle &style) {
-    LegendWriter w(list, top_left, style);
+    LegendRows w(
+        list, top_left,
+        {style.legend_row_mm, style.label_size_pt, kSwatchWidth_mm, kTextGap_mm, cs::kInk});
     const auto marker = [&](MarkerShape shape, double size_mm, Colour colour, bool hollow,
                             const std::string &what) {
         return [&list, shape, size_mm, colour, hollow, what](PointMm p) {
