@@ -1,0 +1,39 @@
+#pragma once
+// Settings of one age-depth model run (buildAgeModel, age_model.hpp).
+#include "atollog/engine/accretion_rates.hpp"
+
+#include <cstdint>
+#include <optional>
+#include <vector>
+
+namespace atollog {
+
+/// The age of the core top (depth 0, the collar), treated as one more tie: a point in depth with
+/// a normal age, or an exact age when sd_ma is 0.
+struct CoreTopAge {
+    double age_ma = 0; ///< 0: the core top is "now"
+    double sd_ma = 0;
+};
+
+struct AgeModelSettings {
+    int draws = 10000;      ///< 1 .. 10,000,000
+    std::uint64_t seed = 1; ///< same seed, same result, bit for bit, at any thread count
+    double grid_step_m = 0.5;
+    /// Unset: no tie at the core top; the model starts at the shallowest tie bracket. Default:
+    /// the collar is present day (0 Ma at 0 m) unless the user gives another age. Why: a reef
+    /// flat cored at low tide is still growing; a raised or eroded top needs its own age.
+    std::optional<CoreTopAge> core_top = CoreTopAge{};
+    /// Extend the model below the deepest tie bracket with the deepest segment's rate, down to
+    /// extrapolate_to_m (or the deepest kept depth or rate interval, if deeper).
+    bool extrapolate_below = false;
+    std::optional<double> extrapolate_to_m;
+    /// Logged surfaces where the age may jump (exposure, hardground, erosion from
+    /// loggedSurfaces); the caller chooses which.
+    std::vector<double> hiatus_depths_m;
+    /// Logged intervals whose accretion rate is wanted, besides every pair of consecutive ties.
+    std::vector<RateInterval> rate_intervals;
+    int threads = 1;       ///< 1 .. 256; never changes the result
+    int outlier_draws = 1000; ///< draws per leave-one-out run; 0 skips the outlier search
+};
+
+} // namespace atollog
