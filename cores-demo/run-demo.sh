@@ -28,4 +28,7 @@ for hole in KAL1 TOR1 OSS1 PEL1; do
 done
 run chart "$project" --hole TOR1 --extend 0.95 --out build/demo-range-chart-TOR1.svg
 run chart "$project" --hole TOR1 --extend 0.95 --page a4 --out build/demo-range-chart-TOR1.pdf
+# Numerical dates (U-Th from activity ratios, radiocarbon calibrated) and the chain's migration.
+run dates "$project"
+run chain "$project"
 run history "$project"

@@ -31,5 +31,7 @@ CommandRun addRangesCommand(CLI::App& app, const CommandIo& io);
 CommandRun addDatumsCommand(CLI::App& app, const CommandIo& io);
 CommandRun addZonesCommand(CLI::App& app, const CommandIo& io);
 CommandRun addChartCommand(CLI::App& app, const CommandIo& io);
+CommandRun addChainCommand(CLI::App& app, const CommandIo& io);
+CommandRun addDatesCommand(CLI::App& app, const CommandIo& io);
 
 } // namespace atollog::cli

@@ -42,6 +42,8 @@ int runCli(int argc, const char* const* argv, std::ostream& out, std::ostream& e
     add(addDatumsCommand);
     add(addZonesCommand);
     add(addChartCommand);
+    add(addDatesCommand);
+    add(addChainCommand);
     add(addHistoryCommand);
 
     try {
