@@ -1,9 +1,12 @@
+// The age model's passes over Gibbs draws: a pilot that finds the histogram ranges, and the main
+// pass that feeds every kept draw, with weight 1, into the streaming quantiles.
 #include "atollog/engine/age_model.hpp"
 
-#include "age_model_draw.hpp"
+#include "age_model_gibbs.hpp"
 #include "age_model_inputs.hpp"
 #include "age_model_outliers.hpp"
 #include "age_model_quantities.hpp"
+#include "age_model_tails.hpp"
 #include "age_profile.hpp"
 #include "draw_seeds.hpp"
 #include "parallel_blocks.hpp"
@@ -13,8 +16,6 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
-#include <numbers>
-#include <stdexcept>
 
 namespace atollog {
 
@@ -22,17 +23,14 @@ namespace {
 
 using namespace atollog::detail;
 
-constexpr std::size_t kBlockDraws = 64; ///< fixed: the result never depends on threads
+/// Kept draws per chain: fixed, so the result never depends on the thread count. Each chain
+/// pays its burn-in once; 512 keeps that cost near a fifth of the kept sweeps at the defaults.
+constexpr std::size_t kChainDraws = 512;
+/// Draws whose grid ages are buffered before they go into the histograms column by column
+/// (each column's histogram row is then fetched once per buffer).
+constexpr std::size_t kBufferDraws = 256;
 constexpr int kBins = 512;
-constexpr int kPilotDraws = 1024;
-constexpr double kWeightScale = 0x1.0p40; ///< a draw's weight in integer units, at most 2^40
-/// The reference weight sits e^8 above the pilot's best draw, so later draws rarely beat it
-/// (then the main pass reruns with the true maximum); weights below 2^-40 of it count as 0.
-constexpr double kPilotMargin = 8.0;
-/// Pilot draws this far below the pilot's best (log) do not widen the histogram ranges.
-constexpr double kPilotRangeCut = 20.0;
-
-__extension__ typedef unsigned __int128 U128;
+constexpr std::size_t kPilotDraws = 1024;
 
 struct MinMax {
     std::vector<double> lo, hi;
@@ -64,150 +62,142 @@ struct MinMax {
     }
 };
 
-struct Ranges {
-    std::vector<QuantileRange> grid, hiatus, rates;
-    double log_weight_max = 0;
+/// Histogram columns: grid nodes, hiatuses, rates, tie ages, tie depths.
+struct Columns {
+    std::vector<QuantileRange> grid, hiatus, rates, tie_age, tie_depth;
 };
 
-/// Pilot run: the reference weight and the histogram ranges.
-Ranges pilotRanges(const PreparedModel& m, const AgeModelSettings& s) {
-    const std::size_t n = static_cast<std::size_t>(std::min(s.draws, kPilotDraws));
-    const std::size_t blocks = (n + kBlockDraws - 1) / kBlockDraws;
-    std::vector<TieDraw> draws(n);
-    runBlocks(blocks, s.threads, [&](std::size_t b, std::size_t) {
-        std::mt19937_64 rng(blockSeed(s.seed, DrawStream::Pilot, b));
-        for (std::size_t j = b * kBlockDraws; j < std::min(n, (b + 1) * kBlockDraws); ++j)
-            drawTies(m.ties, rng, draws[j]);
-    });
-    Ranges out;
-    out.log_weight_max = -std::numeric_limits<double>::infinity();
-    for (const TieDraw& d : draws)
-        out.log_weight_max = std::max(out.log_weight_max, d.log_weight);
-    if (!std::isfinite(out.log_weight_max))
-        return out;
-    const std::size_t threads = static_cast<std::size_t>(s.threads);
-    std::vector<MinMax> grid(threads, MinMax(m.nodes.size()));
-    std::vector<MinMax> hiatus(threads, MinMax(m.surfaces_m.size()));
-    std::vector<MinMax> rates(threads, MinMax(rateColumns(m)));
+/// Runs chain `chain` of `stream`: initial state, burn-in, then `count` kept draws, each
+/// `thin` sweeps apart, handed to on_draw(j, state).
+template <class OnDraw>
+void runChain(const PreparedModel& m, const AgeModelSettings& s, DrawStream stream,
+              std::size_t chain, std::size_t count, TieDraw& state, OnDraw&& on_draw) {
+    std::mt19937_64 rng(blockSeed(s.seed, stream, chain));
+    initialGibbsState(m.ties, state);
+    for (int k = 0; k < s.burn_in_sweeps; ++k)
+        gibbsSweep(m.ties, rng, state);
+    for (std::size_t j = 0; j < count; ++j) {
+        for (int k = 0; k < s.thin; ++k)
+            gibbsSweep(m.ties, rng, state);
+        on_draw(j, state);
+    }
+}
+
+std::size_t chainsFor(std::size_t n) { return (n + kChainDraws - 1) / kChainDraws; }
+std::size_t chainCount(std::size_t n, std::size_t chain) {
+    return std::min(n, (chain + 1) * kChainDraws) - chain * kChainDraws;
+}
+
+/// Pilot run (its own stream): the histogram ranges.
+Columns pilotColumns(const PreparedModel& m, const AgeModelSettings& s) {
+    const std::size_t n = std::min(static_cast<std::size_t>(s.draws), kPilotDraws);
+    const std::size_t chains = chainsFor(n);
+    const std::size_t threads =
+        std::min<std::size_t>(static_cast<std::size_t>(s.threads), chains);
+    const std::size_t ties = m.ties.size();
+    std::vector<MinMax> grid(threads, MinMax(m.nodes.size())),
+        hiatus(threads, MinMax(m.surfaces_m.size())), rates(threads, MinMax(rateColumns(m))),
+        tie_age(threads, MinMax(ties)), tie_depth(threads, MinMax(ties));
     std::vector<AgeProfile> profiles(threads);
+    std::vector<TieDraw> states(threads);
     std::vector<std::vector<double>> ages(threads, std::vector<double>(m.nodes.size()));
-    runBlocks(blocks, s.threads, [&](std::size_t b, std::size_t t) {
-        for (std::size_t j = b * kBlockDraws; j < std::min(n, (b + 1) * kBlockDraws); ++j) {
-            if (draws[j].log_weight < out.log_weight_max - kPilotRangeCut)
-                continue;
-            profiles[t].build(draws[j], m.surfaces_m);
-            profiles[t].ageAtNodes(m.nodes, ages[t].data(), 1);
-            for (std::size_t i = 0; i < m.nodes.size(); ++i)
-                grid[t].add(i, ages[t][i]);
-            forEachDrawQuantity(
-                m, draws[j], profiles[t], [&](std::size_t k, double v) { hiatus[t].add(k, v); },
-                [&](std::size_t c, double v) { rates[t].add(c, v); });
-        }
+    runBlocks(chains, static_cast<int>(threads), [&](std::size_t c, std::size_t t) {
+        runChain(m, s, DrawStream::Pilot, c, chainCount(n, c), states[t],
+                 [&](std::size_t, const TieDraw& d) {
+                     profiles[t].build(d, m.surfaces_m);
+                     profiles[t].ageAtNodes(m.nodes, ages[t].data(), 1);
+                     for (std::size_t i = 0; i < m.nodes.size(); ++i)
+                         grid[t].add(i, ages[t][i]);
+                     for (std::size_t i = 0; i < ties; ++i) {
+                         tie_age[t].add(i, d.age_ma[i]);
+                         tie_depth[t].add(i, d.depth_m[i]);
+                     }
+                     forEachDrawQuantity(
+                         m, d, profiles[t],
+                         [&](std::size_t k, double v) { hiatus[t].add(k, v); },
+                         [&](std::size_t k, double v) { rates[t].add(k, v); });
+                 });
     });
     for (std::size_t t = 1; t < threads; ++t) {
         grid[0].merge(grid[t]);
         hiatus[0].merge(hiatus[t]);
         rates[0].merge(rates[t]);
+        tie_age[0].merge(tie_age[t]);
+        tie_depth[0].merge(tie_depth[t]);
     }
-    out.grid = grid[0].ranges();
-    out.hiatus = hiatus[0].ranges();
-    out.rates = rates[0].ranges();
-    return out;
+    return {grid[0].ranges(), hiatus[0].ranges(), rates[0].ranges(), tie_age[0].ranges(),
+            tie_depth[0].ranges()};
 }
 
 struct PassResult {
-    StreamingQuantiles grid, hiatus, rates;
+    StreamingQuantiles grid, hiatus, rates, tie_age, tie_depth;
     std::vector<std::uint64_t> hiatus_positive;
-    std::uint64_t weight_sum = 0;
-    U128 weight_sq_sum = 0;
-    std::size_t used = 0;
-    double log_weight_max = -std::numeric_limits<double>::infinity();
 
-    explicit PassResult(const Ranges& r)
-        : grid(r.grid, kBins), hiatus(r.hiatus, kBins), rates(r.rates, kBins),
-          hiatus_positive(r.hiatus.size(), 0) {}
+    explicit PassResult(const Columns& c)
+        : grid(c.grid, kBins), hiatus(c.hiatus, kBins), rates(c.rates, kBins),
+          tie_age(c.tie_age, kBins), tie_depth(c.tie_depth, kBins),
+          hiatus_positive(c.hiatus.size(), 0) {}
     void merge(const PassResult& o) {
         grid.merge(o.grid);
         hiatus.merge(o.hiatus);
         rates.merge(o.rates);
+        tie_age.merge(o.tie_age);
+        tie_depth.merge(o.tie_depth);
         for (std::size_t k = 0; k < hiatus_positive.size(); ++k)
             hiatus_positive[k] += o.hiatus_positive[k];
-        weight_sum += o.weight_sum;
-        weight_sq_sum += o.weight_sq_sum;
-        used += o.used;
-        log_weight_max = std::max(log_weight_max, o.log_weight_max);
     }
 };
 
-std::uint64_t integerWeight(double log_weight, double log_reference) {
-    const double x = log_weight - log_reference;
-    if (x >= 0)
-        return static_cast<std::uint64_t>(kWeightScale);
-    return static_cast<std::uint64_t>(std::llround(std::exp(x) * kWeightScale));
-}
-
-/// The main pass: every draw, weighted against log_reference, into streaming quantiles.
-PassResult mainPass(const PreparedModel& m, const AgeModelSettings& s, const Ranges& ranges,
-                    double log_reference, std::vector<std::uint64_t>& weights,
+/// The main pass: every kept draw, weight 1, into the streaming quantiles; ages at the kept
+/// depths stored per draw.
+PassResult mainPass(const PreparedModel& m, const AgeModelSettings& s, const Columns& columns,
                     std::vector<std::vector<double>>& kept) {
     const std::size_t n = static_cast<std::size_t>(s.draws);
-    const std::size_t blocks = (n + kBlockDraws - 1) / kBlockDraws;
-    const std::size_t threads = std::min<std::size_t>(static_cast<std::size_t>(s.threads), blocks);
+    const std::size_t chains = chainsFor(n);
+    const std::size_t threads =
+        std::min<std::size_t>(static_cast<std::size_t>(s.threads), chains);
     const std::size_t nodes = m.nodes.size();
-    std::vector<PassResult> acc(threads, PassResult(ranges));
-    std::vector<std::vector<double>> buffers(threads, std::vector<double>(nodes * kBlockDraws));
-    std::vector<TieDraw> draws(threads);
+    std::vector<PassResult> acc(threads, PassResult(columns));
+    std::vector<std::vector<double>> buffers(threads, std::vector<double>(nodes * kBufferDraws));
+    std::vector<TieDraw> states(threads);
     std::vector<AgeProfile> profiles(threads);
-    runBlocks(blocks, static_cast<int>(threads), [&](std::size_t b, std::size_t t) {
-        std::mt19937_64 rng(blockSeed(s.seed, DrawStream::Main, b));
+    runBlocks(chains, static_cast<int>(threads), [&](std::size_t c, std::size_t t) {
         PassResult& a = acc[t];
         double* buffer = buffers[t].data();
-        std::uint64_t block_w[kBlockDraws] = {};
-        const std::size_t first = b * kBlockDraws;
-        const std::size_t count = std::min(n, first + kBlockDraws) - first;
-        for (std::size_t j = 0; j < count; ++j) {
-            TieDraw& d = draws[t];
-            drawTies(m.ties, rng, d);
-            a.log_weight_max = std::max(a.log_weight_max, d.log_weight);
-            const std::uint64_t w = integerWeight(d.log_weight, log_reference);
-            block_w[j] = w;
-            weights[first + j] = w;
-            a.weight_sum += w;
-            a.weight_sq_sum += static_cast<U128>(w) * w;
-            a.used += w > 0;
-            AgeProfile& p = profiles[t];
-            p.build(d, m.surfaces_m);
-            p.ageAtNodes(m.nodes, buffer + j, kBlockDraws);
-            for (std::size_t k = 0; k < m.kept_m.size(); ++k)
-                kept[k][first + j] = p.ageAt(m.kept_m[k], false);
-            if (w == 0)
-                continue;
-            forEachDrawQuantity(
-                m, d, p,
-                [&](std::size_t k, double v) {
-                    a.hiatus.add(k, v, w);
-                    a.hiatus_positive[k] += v > 0 ? w : 0;
-                },
-                [&](std::size_t c, double v) { a.rates.add(c, v, w); });
-        }
-        // Column by column: one histogram row stays in cache for the whole block.
-        for (std::size_t i = 0; i < nodes; ++i)
-            for (std::size_t j = 0; j < count; ++j)
-                a.grid.add(i, buffer[i * kBlockDraws + j], block_w[j]);
+        std::size_t buffered = 0;
+        // Column by column: one histogram row stays in cache for the whole buffer.
+        auto flush = [&] {
+            for (std::size_t i = 0; i < nodes; ++i)
+                a.grid.addMany(i, buffer + i * kBufferDraws, buffered, 1, 1);
+            buffered = 0;
+        };
+        const std::size_t first = c * kChainDraws;
+        runChain(m, s, DrawStream::Main, c, chainCount(n, c), states[t],
+                 [&](std::size_t j, const TieDraw& d) {
+                     AgeProfile& p = profiles[t];
+                     p.build(d, m.surfaces_m);
+                     p.ageAtNodes(m.nodes, buffer + buffered, kBufferDraws);
+                     if (++buffered == kBufferDraws)
+                         flush();
+                     for (std::size_t k = 0; k < m.kept_m.size(); ++k)
+                         kept[k][first + j] = p.ageAt(m.kept_m[k], false);
+                     for (std::size_t i = 0; i < m.ties.size(); ++i) {
+                         a.tie_age.add(i, d.age_ma[i], 1);
+                         a.tie_depth.add(i, d.depth_m[i], 1);
+                     }
+                     forEachDrawQuantity(
+                         m, d, p,
+                         [&](std::size_t k, double v) {
+                             a.hiatus.add(k, v, 1);
+                             a.hiatus_positive[k] += v > 0 ? 1 : 0;
+                         },
+                         [&](std::size_t k, double v) { a.rates.add(k, v, 1); });
+                 });
+        flush();
     });
     for (std::size_t t = 1; t < threads; ++t)
         acc[0].merge(acc[t]);
     return std::move(acc[0]);
-}
-
-[[noreturn]] void failNoOrder(const std::string& hole, const PreparedModel& m,
-                              const AgeModelSettings& s) {
-    std::string msg = "buildAgeModel: hole '" + hole +
-                      "': no draw puts the ties in order (every weight is 0)";
-    const auto ranked = rankTieInfluence(m.ties, std::max(s.outlier_draws, 200), s.seed, s.threads);
-    if (!ranked.empty())
-        msg += "; leaving out tie '" + ranked.front().label + "' helps most";
-    throw std::invalid_argument(msg);
 }
 
 } // namespace
@@ -216,34 +206,22 @@ AgeModel buildAgeModel(const std::string& hole, std::vector<AgeTie> ties,
                        const AgeModelSettings& settings,
                        const std::vector<double>& keep_draws_at_m) {
     const PreparedModel m = prepareAgeModel(hole, ties, settings, keep_draws_at_m);
-    const Ranges ranges = pilotRanges(m, settings);
-    if (!std::isfinite(ranges.log_weight_max))
-        failNoOrder(hole, m, settings);
-
+    const Columns columns = pilotColumns(m, settings);
     const std::size_t n = static_cast<std::size_t>(settings.draws);
-    std::vector<std::uint64_t> weights(n);
     std::vector<std::vector<double>> kept(m.kept_m.size(), std::vector<double>(n));
-    double log_reference = ranges.log_weight_max + kPilotMargin;
-    PassResult pass = mainPass(m, settings, ranges, log_reference, weights, kept);
-    if (pass.log_weight_max > log_reference) { // a draw beat the reference: weigh again
-        log_reference = pass.log_weight_max;
-        pass = mainPass(m, settings, ranges, log_reference, weights, kept);
-    }
-    if (pass.weight_sum == 0)
-        failNoOrder(hole, m, settings);
+    const PassResult pass = mainPass(m, settings, columns, kept);
+    const double total = static_cast<double>(n);
 
     AgeModel out;
     out.hole = hole;
     out.seed = settings.seed;
     out.draws = settings.draws;
-    out.draws_used = pass.used;
-    const long double wsum = static_cast<long double>(pass.weight_sum);
-    out.effective_draws =
-        static_cast<double>(wsum * wsum / static_cast<long double>(pass.weight_sq_sum));
-    const double log_mean = std::log(static_cast<double>(wsum) / kWeightScale) + log_reference -
-                            std::log(static_cast<double>(n));
-    out.log10_acceptance = log_mean / std::numbers::ln10;
-    out.acceptance_rate = std::exp(log_mean);
+    out.draws_used = n;
+    out.effective_draws = total;
+    // The chance that independent draws of all ties come out in order, estimated by the
+    // importance-weighted independent sampler (age_model_draw.hpp) on its own stream.
+    out.log10_acceptance = log10MeanWeight(m.ties, -1, settings.acceptance_draws, settings.seed);
+    out.acceptance_rate = std::pow(10.0, out.log10_acceptance);
 
     for (std::size_t i = 0; i < m.nodes.size(); ++i)
         out.grid.push_back({m.nodes[i].depth_m, m.nodes[i].above_surface,
@@ -254,20 +232,20 @@ AgeModel buildAgeModel(const std::string& hole, std::vector<AgeTie> ties,
         HiatusEstimate h;
         h.depth_m = m.surfaces_m[k];
         const std::uint64_t w = pass.hiatus.totalWeight(k);
-        h.resolved_share = static_cast<double>(static_cast<long double>(w) / wsum);
+        h.resolved_share = static_cast<double>(w) / total;
         if (w > 0) {
             h.duration_q025_myr = pass.hiatus.quantile(k, 0.025);
             h.duration_q500_myr = pass.hiatus.quantile(k, 0.5);
             h.duration_q975_myr = pass.hiatus.quantile(k, 0.975);
-            h.probability_positive = static_cast<double>(
-                static_cast<long double>(pass.hiatus_positive[k]) / static_cast<long double>(w));
+            h.probability_positive =
+                static_cast<double>(pass.hiatus_positive[k]) / static_cast<double>(w);
         }
         out.hiatuses.push_back(h);
     }
 
     auto rate = [&](std::size_t c, AccretionRate r) {
         const std::uint64_t w = pass.rates.totalWeight(c);
-        r.defined_share = static_cast<double>(static_cast<long double>(w) / wsum);
+        r.defined_share = static_cast<double>(w) / total;
         if (w > 0) {
             r.rate_q025_m_per_myr = pass.rates.quantile(c, 0.025);
             r.rate_q500_m_per_myr = pass.rates.quantile(c, 0.5);
@@ -293,12 +271,14 @@ AgeModel buildAgeModel(const std::string& hole, std::vector<AgeTie> ties,
         rate(m.ties.size() - 1 + i, r);
     }
 
+    for (std::size_t i = 0; i < m.ties.size(); ++i)
+        out.tie_tails.push_back(tieTail(m.ties[i], pass.tie_depth.quantile(i, 0.5),
+                                        pass.tie_age.quantile(i, 0.5)));
+    rankTieTails(out.tie_tails);
+
     out.kept_depths_m = m.kept_m;
     out.kept_age_draws_ma = std::move(kept);
-    out.draw_weights.resize(n);
-    for (std::size_t j = 0; j < n; ++j)
-        out.draw_weights[j] =
-            static_cast<double>(static_cast<long double>(weights[j]) / wsum);
+    out.draw_weights.assign(n, 1.0 / total);
 
     if (settings.outlier_draws > 0)
         out.outlier_ranking =

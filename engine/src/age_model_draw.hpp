@@ -1,6 +1,8 @@
 #pragma once
 // One draw of the ties: depths uniform in their brackets, then ages from the top down, each
-// truncated to at least the age above it, with the log of the product of truncated masses.
+// truncated to at least the age above it, with the log of the product of truncated masses. The
+// model's draws come from the Gibbs sampler (age_model_gibbs.hpp), which reuses TieDraw as its
+// state; these independent weighted draws estimate the acceptance rate and rank outliers.
 #include "age_model_inputs.hpp"
 
 #include <random>

@@ -31,6 +31,13 @@ void validateSettings(const AgeModelSettings& s) {
         fail("threads must be 1 .. 256, got " + std::to_string(s.threads));
     if (s.outlier_draws < 0 || s.outlier_draws > 10'000'000)
         fail("outlier_draws must be 0 .. 10,000,000, got " + std::to_string(s.outlier_draws));
+    if (s.burn_in_sweeps < 0 || s.burn_in_sweeps > 1'000'000)
+        fail("burn_in_sweeps must be 0 .. 1,000,000, got " + std::to_string(s.burn_in_sweeps));
+    if (s.thin < 1 || s.thin > 1000)
+        fail("thin must be 1 .. 1000, got " + std::to_string(s.thin));
+    if (s.acceptance_draws < 1 || s.acceptance_draws > 10'000'000)
+        fail("acceptance_draws must be 1 .. 10,000,000, got " +
+             std::to_string(s.acceptance_draws));
     if (s.core_top) {
         if (!std::isfinite(s.core_top->age_ma) || std::fabs(s.core_top->age_ma) > kMaxAbsAgeMa)
             fail("core top age must be finite (|age| <= 1e6 Ma), got " + num(s.core_top->age_ma));

@@ -71,6 +71,39 @@ void StreamingQuantiles::add(std::size_t column, double value, std::uint64_t wei
                              static_cast<FixedSum>(std::llround(value * kFixedScale));
 }
 
+void StreamingQuantiles::addMany(std::size_t column, const double* values, std::size_t count,
+                                 std::size_t stride, std::uint64_t weight) {
+    if (weight == 0 || count == 0)
+        return;
+    const QuantileRange& r = ranges_[column];
+    const double lo = r.lo, width = r.hi - r.lo, bins = bins_;
+    std::uint64_t* counts = &counts_[column * static_cast<std::size_t>(bins_)];
+    double mn = min_[column], mx = max_[column];
+    FixedSum sum = 0;
+    for (std::size_t j = 0; j < count; ++j) {
+        const double value = values[j * stride];
+        if (!std::isfinite(value) || std::fabs(value) >= 0x1.0p30)
+            add(column, value, weight); // throws with add()'s message
+        const double pos = (value - lo) / width * bins;
+        if (pos < 0)
+            below_[column].emplace_back(value, weight);
+        else if (pos >= bins)
+            above_[column].emplace_back(value, weight);
+        else
+            counts[static_cast<std::size_t>(pos)] += weight;
+        mn = std::min(mn, value);
+        mx = std::max(mx, value);
+        // Rounded half away from zero as add() does (llround), without the library call.
+        const double scaled = value * kFixedScale;
+        sum += static_cast<FixedSum>(
+            static_cast<std::int64_t>(scaled + (scaled >= 0 ? 0.5 : -0.5)));
+    }
+    total_[column] += weight * count;
+    min_[column] = mn;
+    max_[column] = mx;
+    weighted_sum_[column] += static_cast<FixedSum>(weight) * sum;
+}
+
 void StreamingQuantiles::merge(const StreamingQuantiles& other) {
     if (other.ranges_.size() != ranges_.size() || other.bins_ != bins_)
         throw std::invalid_argument("StreamingQuantiles::merge: different columns or bins");

@@ -84,4 +84,43 @@ TruncatedDraw truncatedNormalDraw(double mean, double sd, double floor, double u
     return {std::max(mean + sd * z, floor), log_mass};
 }
 
+namespace {
+
+/// Standard normal truncated to [a, b] with b <= 0 or a <= 0 <= b handled by the caller's flip:
+/// here a <= 0 (the interval reaches the lower side, where Phi keeps its digits).
+double standardBetweenLowerSide(double a, double b, double u) {
+    if (b < -30.0) {
+        // Both ends more than 30 sd below the mean: on [-b, -a] the density is proportional to
+        // exp(-t^2/2) ~ exp(-c t) near c = -b (the Mills-ratio tail approximation); draw t - c
+        // from an exponential of rate c truncated to -a - c, then flip back.
+        const double c = -b;
+        const double width = -a - c; // may be +inf
+        const double cut = std::isfinite(width) ? -std::expm1(-c * width) : 1.0;
+        const double t = c - std::log1p(-u * cut) / c;
+        return std::clamp(-t, a, b);
+    }
+    // An end more than 8.5 sd out cuts off less than 1e-17: taken as open (and clamped).
+    const double lo_p = a > -8.5 ? 0.5 * std::erfc(-a / std::numbers::sqrt2) : 0.0;
+    const double hi_p = b < 8.5 ? 0.5 * std::erfc(-b / std::numbers::sqrt2) : 1.0;
+    const double mass = hi_p - lo_p;
+    if (!(mass > 0)) // an interval too narrow for double cdf differences: any point of it
+        return std::clamp(a + u * (b - a), a, b);
+    const double p = std::clamp(lo_p + u * mass, 0x1.0p-1074, std::nextafter(1.0, 0.0));
+    return std::clamp(standardNormalQuantile(p), a, b);
+}
+
+} // namespace
+
+double truncatedNormalBetween(double mean, double sd, double lo, double hi, double u) {
+    if (!(hi > lo))
+        return lo;
+    const double a = (lo - mean) / sd, b = (hi - mean) / sd;
+    // Keep the interval on the lower side: if it lies wholly above the mean, flip it (and u,
+    // which keeps the draw increasing in u).
+    const bool flip = a > 0;
+    const double z = flip ? -standardBetweenLowerSide(-b, -a, 1.0 - u)
+                          : standardBetweenLowerSide(a, b, u);
+    return std::clamp(mean + sd * z, lo, hi);
+}
+
 } // namespace atollog::detail

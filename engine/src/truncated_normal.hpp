@@ -20,4 +20,11 @@ struct TruncatedDraw {
 /// approximation: such draws carry a weight below 1e-190 and only their ranking matters.
 TruncatedDraw truncatedNormalDraw(double mean, double sd, double floor, double u);
 
+/// Draws from Normal(mean, sd) truncated to [lo, hi] (lo <= hi; either may be infinite) with
+/// the uniform u in (0, 1), for the Gibbs sampler's two-sided age updates. Works on the side of
+/// the mean where the interval lies farther out (by symmetry), so the normal cdf keeps its
+/// digits; beyond 30 sd it draws from the exponential approximation of the tail truncated to
+/// the interval. Always finite and inside [lo, hi] (lo when lo == hi), never NaN.
+double truncatedNormalBetween(double mean, double sd, double lo, double hi, double u);
+
 } // namespace atollog::detail

@@ -3,7 +3,7 @@
 // draw at every depth and sorts each depth (same draws, measured side by side in this run).
 #include "atollog/engine/age_model.hpp"
 
-#include "../../engine/src/age_model_draw.hpp"
+#include "../../engine/src/age_model_gibbs.hpp"
 #include "../../engine/src/age_model_inputs.hpp"
 #include "../../engine/src/age_profile.hpp"
 #include "../../engine/src/draw_seeds.hpp"
@@ -44,28 +44,28 @@ std::vector<AgeTie> benchTies() {
     return t;
 }
 
-/// The plain version: the same weighted draws kept in a draws x depths matrix, each depth
-/// sorted with its weights for the same three quantiles.
+/// The plain version: the same Gibbs chains (512 kept draws each, same seeds, burn-in and
+/// thinning) kept in a draws x depths matrix, each depth sorted for the same three quantiles.
 double plainMedianSum(const std::vector<AgeTie>& ties, const AgeModelSettings& s) {
     const detail::PreparedModel m = detail::prepareAgeModel("B1", ties, s, {});
     const std::size_t n = static_cast<std::size_t>(s.draws), g = m.nodes.size();
-    std::vector<double> ages(n * g), logw(n);
+    std::vector<double> ages(n * g);
     detail::TieDraw d;
     detail::AgeProfile p;
-    for (std::size_t b = 0; b * 64 < n; ++b) {
+    for (std::size_t b = 0; b * 512 < n; ++b) {
         std::mt19937_64 rng(detail::blockSeed(s.seed, detail::DrawStream::Main, b));
-        for (std::size_t j = b * 64; j < std::min(n, b * 64 + 64); ++j) {
-            detail::drawTies(m.ties, rng, d);
-            logw[j] = d.log_weight;
+        detail::initialGibbsState(m.ties, d);
+        for (int k = 0; k < s.burn_in_sweeps; ++k)
+            detail::gibbsSweep(m.ties, rng, d);
+        for (std::size_t j = b * 512; j < std::min(n, b * 512 + 512); ++j) {
+            for (int k = 0; k < s.thin; ++k)
+                detail::gibbsSweep(m.ties, rng, d);
             p.build(d, m.surfaces_m);
             p.ageAtNodes(m.nodes, &ages[j], n); // column-major: one depth's draws together
         }
     }
-    const double top = *std::max_element(logw.begin(), logw.end());
-    std::vector<double> w(n);
-    for (std::size_t j = 0; j < n; ++j)
-        w[j] = std::exp(logw[j] - top);
-    const double total = std::accumulate(w.begin(), w.end(), 0.0);
+    const std::vector<double> w(n, 1.0);
+    const double total = static_cast<double>(n);
     double checksum = 0;
     std::vector<std::size_t> idx(n);
     for (std::size_t i = 0; i < g; ++i) {
@@ -104,8 +104,9 @@ int main() {
     std::printf("age model: %d draws x %zu ties x %zu grid depths\n", s.draws, ties.size(),
                 one.grid.size());
     std::printf("  streaming, 1 thread : %.3f s (target < 0.5 s), peak RSS %ld MB, "
-                "effective draws %.0f, log10 acceptance %.1f\n",
-                t_one, rss_engine, one.effective_draws, one.log10_acceptance);
+                "draws kept %.0f (Gibbs, burn-in %d, thin %d), log10 acceptance %.1f\n",
+                t_one, rss_engine, one.effective_draws, s.burn_in_sweeps, s.thin,
+                one.log10_acceptance);
 
     s.threads = 2;
     t0 = std::chrono::steady_clock::now();

@@ -56,9 +56,11 @@ HoleInputs inputsOf(const std::string& hole) {
 
 } // namespace
 
-// Hidden ([.]) while it fails: the order-respecting importance sampler degenerates on the demo
-// (effective draws near 1) when precise U-Th dates sit among datum ties; see the age model's
-// open issue. Run it with: cli_tests "[demo_age_model]".
+// Hidden ([.]) while it fails: with the Gibbs sampler the 95 % band holds the true age at about
+// 83 % of grid depths (target 90 %); most misses lie below the deepest tie of a hole, where the
+// grid runs on to the deepest bracket base and the age is extrapolated with the rate of the
+// deepest segment, often between two dates a metre apart. Run it with:
+// cli_tests "[demo_age_model]".
 TEST_CASE("demo age models hold the true age and find the hiatuses made",
           "[.][demo_age_model][age_model]") {
     const DemoTruth& truth = demoData().truth;
@@ -114,7 +116,17 @@ TEST_CASE("demo age models hold the true age and find the hiatuses made",
                   << (m.outlier_ranking.empty() ? "-" : m.outlier_ranking.front().label)
                   << " (log10 gain "
                   << (m.outlier_ranking.empty() ? 0.0 : m.outlier_ranking.front().log10_gain)
-                  << ")\n";
+                  << "); largest tail score " << m.tie_tails.front().label << " (z "
+                  << m.tie_tails.front().z_score << ")\n";
+        // The ties the order pulls farthest into their own tails, against the true age at
+        // their posterior median depth.
+        for (std::size_t k = 0; k < m.tie_tails.size() && k < 6; ++k) {
+            const TieTail& t = m.tie_tails[k];
+            std::cout << "  tail " << t.label << ": z " << t.z_score << ", median "
+                      << t.age_q500_ma << " Ma at " << t.depth_q500_m << " m, true "
+                      << trueAgeMa(truth, h.hole, t.depth_q500_m) << " Ma"
+                      << (t.likely_outlier ? " [likely outlier]" : "") << "\n";
+        }
         for (const HiatusEstimate& e : m.hiatuses) {
             bool made = false;
             for (const TrueHiatus& t : truth.hiatuses)

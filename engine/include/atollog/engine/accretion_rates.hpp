@@ -6,6 +6,8 @@
 // Across a hiatus: the rate between two ties on either side of a surface is a mean rate that
 // includes the missing time; the rate of a logged interval excludes the jump of every surface
 // inside it or at its ends (its top is read just below a surface there, its base just above).
+#include "atollog/engine/rate_units.hpp" // mmPerYrFromMPerMyr
+
 #include <string>
 
 namespace atollog {
@@ -22,7 +24,6 @@ struct RateInterval {
 constexpr double kReefAccretionMin_mm_per_yr = 1.0;
 constexpr double kReefAccretionMax_mm_per_yr = 10.0;
 
-constexpr double mmPerYrFromMPerMyr(double rate_m_per_myr) { return rate_m_per_myr * 0.001; }
 
 struct AccretionRate {
     std::string label;   ///< "<upper tie> .. <lower tie>" or the interval's label

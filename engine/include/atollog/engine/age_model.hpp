@@ -3,18 +3,28 @@
 // distribution each), in which age never decreases downward except by a non-negative jump at a
 // logged surface, with linear interpolation between ties.
 //
-// Sampler (order respected by construction, weighted): each draw places every tie uniformly in
-// its bracket, independently; sorts the ties by the depths drawn; then, from the top down, draws
-// each tie's age from its distribution truncated to at least the age reached above it
-// (quantile(F(lo) + u (1 - F(lo)))). The draw's importance weight is the product of the
-// truncated masses, so the weighted draws follow the ties' distributions conditioned on order.
-// A tie whose distribution lies wholly younger than the age forced on it by shallower ties gives
-// a weight near 0 in every draw: the leave-one-out search names it.
+// Sampler: Gibbs sampling (Geman & Geman 1984; Gelfand & Smith 1990) over the joint state of
+// the ties (a depth in each bracket, an age for each), with the order constraint handled as in
+// Gelfand, Smith & Lee (1992, JASA 87:523): each sweep draws every tie's depth uniformly between
+// its neighbours' depths (inside its bracket) and its age from its own distribution truncated to
+// [age of the tie above, age of the tie below]; each sweep ends with a Metropolis move that lets
+// two ties adjacent in depth swap places (depths and ages) when their brackets allow it, so
+// overlapping brackets are not held in their midpoint order. Chains start from the
+// medians made monotone (isotonic regression), run burn_in_sweeps, then keep one state every
+// `thin` sweeps; each fixed block of 512 kept draws runs its own chain from a seed derived from
+// the run seed, so any thread count gives the same result. Every kept draw has weight 1.
 //
-// Acceptance rate (what is reported): the mean weight, i.e. the probability that independent
-// draws of all ties come out in order; plain rejection sampling would keep that share. A tiny
-// value means ties disagree; effective_draws (Kish: (sum w)^2 / sum w^2) says how many equally
-// weighted draws the weighted ones are worth.
+// Conflicting ties: the Gibbs draws always respect the order, so ties that disagree no longer
+// make the run fail; the order pulls them together, and a conflicting tie shows up as one whose
+// posterior median age lies far in the tail of its own distribution (tie_tails, ranked by
+// |z|). Draws of neighbouring ties squeezed together by a conflict are strongly correlated, so
+// the chain moves slowly there: treat a likely outlier's band as a warning, not an estimate.
+//
+// Acceptance rate (what is reported): the chance that independent draws of all ties come out in
+// order, estimated with acceptance_draws importance-weighted independent draws (each tie placed
+// in its bracket, ages drawn top-down truncated to at least the age above, weight = product of
+// truncated masses; the mean weight). A tiny value means ties disagree. The leave-one-out
+// search (outlier_ranking) reruns that estimate without each tie in turn.
 //
 // Hiatus at a surface s lying between consecutive ties i (above) and i+1 (below) in a draw: the
 // age just above s is extrapolated down from tie i with the rate of the segment above it, the
@@ -55,7 +65,7 @@ struct AgeGridRow {
 
 struct HiatusEstimate {
     double depth_m = 0;
-    /// Weighted share of draws in which the surface lay between two ties with a rate on each
+    /// Share of draws in which the surface lay between two ties with a rate on each
     /// side and was the only (or deepest) surface between them: the quantiles are over those.
     double resolved_share = 0;
     std::optional<double> duration_q025_myr; ///< unset when resolved_share is 0
@@ -73,21 +83,40 @@ struct TieInfluence {
     bool likely_conflict = false;
 };
 
+/// How far a tie's posterior median age lies in the tail of its own distribution. The Gibbs
+/// draws always respect the order, so a tie that conflicts with the others is pulled to where
+/// they allow: its posterior median then sits far out in its own distribution.
+struct TieTail {
+    std::string label;
+    double depth_q500_m = 0;  ///< posterior median depth
+    double age_q500_ma = 0;   ///< posterior median age
+    /// Normal: (median - mean) / sd. Other distributions: the standard normal quantile of
+    /// cdf(median) (the same where both exist), (median - mean) / sd where cdf is 0 or 1.
+    /// 0 for an exact core top. Positive: the order makes the tie older than it claims.
+    double z_score = 0;
+    double tail_probability = 1; ///< two-sided, erfc(|z| / sqrt 2)
+    /// |z| >= 3: our own threshold, not a published one.
+    bool likely_outlier = false;
+};
+
 struct AgeModel {
     std::string hole;
     std::uint64_t seed = 0;
     int draws = 0;
-    std::size_t draws_used = 0;  ///< draws with a weight above 2^-40 of the reference weight
-    double effective_draws = 0;  ///< Kish effective sample size
-    double acceptance_rate = 0;  ///< mean weight (see the header comment); may underflow to 0
+    std::size_t draws_used = 0;  ///< kept Gibbs draws: all of them (= draws)
+    /// Kish size of the equally weighted kept draws: = draws. Not corrected for the chain's
+    /// autocorrelation.
+    double effective_draws = 0;
+    double acceptance_rate = 0;  ///< see the header comment; may underflow to 0
     double log10_acceptance = 0; ///< log10 of it, finite
     std::vector<AgeGridRow> grid;
     std::vector<HiatusEstimate> hiatuses;         ///< one per hiatus depth, shallowest first
     std::vector<TieInfluence> outlier_ranking;    ///< largest gain first
+    std::vector<TieTail> tie_tails;               ///< every tie, largest |z_score| first
     std::vector<AccretionRate> rates;             ///< consecutive ties, then rate_intervals
     std::vector<double> kept_depths_m;            ///< as asked (keep_draws_at_m)
     std::vector<std::vector<double>> kept_age_draws_ma; ///< [kept depth][draw]
-    std::vector<double> draw_weights;             ///< [draw], summing to 1 (needed with the above)
+    std::vector<double> draw_weights;             ///< [draw], all 1 / draws (Gibbs draws)
 
     /// Quantiles at a depth, interpolated linearly between the two grid rows around it (at and
     /// below a surface: its lower row). nullopt outside the grid.
@@ -100,8 +129,9 @@ struct AgeModel {
 /// another hole, a non-finite or negative bracket or shallow_m > deep_m, no tie (and no core
 /// top), draws outside 1 .. 10,000,000, grid_step_m not finite and > 0, threads outside 1 .. 256,
 /// outlier_draws < 0, a non-finite or negative hiatus depth, a kept depth or rate interval
-/// outside the grid, a core top age or sd not finite (sd < 0), and when every draw has weight 0
-/// (ties that cannot be put in order; the message names the leading outlier).
+/// outside the grid, a core top age or sd not finite (sd < 0), burn_in_sweeps outside
+/// 0 .. 1,000,000, thin outside 1 .. 1000, acceptance_draws outside 1 .. 10,000,000. Ties that
+/// conflict do not throw: see tie_tails and outlier_ranking.
 AgeModel buildAgeModel(const std::string& hole, std::vector<AgeTie> ties,
                        const AgeModelSettings& settings,
                        const std::vector<double>& keep_draws_at_m = {});

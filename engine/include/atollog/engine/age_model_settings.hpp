@@ -34,6 +34,12 @@ struct AgeModelSettings {
     std::vector<RateInterval> rate_intervals;
     int threads = 1;       ///< 1 .. 256; never changes the result
     int outlier_draws = 1000; ///< draws per leave-one-out run; 0 skips the outlier search
+    /// Gibbs sampler (age_model.hpp): sweeps each chain runs before it keeps any (0 .. 1e6),
+    /// and sweeps per kept draw (1 .. 1000). Each fixed block of draws runs its own chain.
+    int burn_in_sweeps = 200;
+    int thin = 2;
+    /// Independent (importance-weighted) draws behind the reported acceptance rate, 1 .. 1e7.
+    int acceptance_draws = 1000;
 };
 
 } // namespace atollog

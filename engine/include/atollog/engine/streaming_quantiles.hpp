@@ -3,8 +3,9 @@
 // interval), without keeping every draw: each column holds a fixed-width histogram over a range
 // found beforehand (a pilot run), with values outside it kept exactly.
 //
-// Why a histogram and not the P-square algorithm (Jain & Chlamtac 1985): the age model's draws
-// carry importance weights, which P-square does not take, and P-square's markers depend on the
+// Why a histogram and not the P-square algorithm (Jain & Chlamtac 1985): weighted draws need
+// weights, which P-square does not take (the age model's Gibbs draws all weigh 1, but the class
+// keeps integer weights), and P-square's markers depend on the
 // order of arrival, which would tie the result to the thread count. Here weights are integers
 // (fixed point), so adding and merging are exact and the result does not depend on the order in
 // which draws or threads arrive.
@@ -36,9 +37,14 @@ class StreamingQuantiles {
 
     /// Adds a value with an integer weight (0 is ignored). Throws std::invalid_argument on a
     /// non-finite value or |value| >= 2^30 (the fixed-point mean's limit). The sum of weights of
-    /// a column must stay below 2^64; the age model keeps each weight at or below 2^40 and the
+    /// a column must stay below 2^64; the age model adds weight 1 per draw, with the
     /// number of draws below 2^24.
     void add(std::size_t column, double value, std::uint64_t weight);
+    /// Adds values[0], values[stride], ... (count of them) to one column, each with `weight`:
+    /// the same result as count calls of add() (the mean up to its last fixed-point unit),
+    /// faster (the age model's grid columns).
+    void addMany(std::size_t column, const double* values, std::size_t count, std::size_t stride,
+                 std::uint64_t weight);
     /// Adds another accumulator with the same ranges and bins (exact: integer sums).
     void merge(const StreamingQuantiles& other);
 
