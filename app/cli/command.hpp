@@ -33,5 +33,8 @@ CommandRun addZonesCommand(CLI::App& app, const CommandIo& io);
 CommandRun addChartCommand(CLI::App& app, const CommandIo& io);
 CommandRun addChainCommand(CLI::App& app, const CommandIo& io);
 CommandRun addDatesCommand(CLI::App& app, const CommandIo& io);
+CommandRun addAgeCommand(CLI::App& app, const CommandIo& io);
+CommandRun addRatesCommand(CLI::App& app, const CommandIo& io);
+CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io);
 
 } // namespace atollog::cli

@@ -43,6 +43,9 @@ int runCli(int argc, const char* const* argv, std::ostream& out, std::ostream& e
     add(addZonesCommand);
     add(addChartCommand);
     add(addDatesCommand);
+    add(addAgeCommand);
+    add(addRatesCommand);
+    add(addSubsidenceCommand);
     add(addChainCommand);
     add(addHistoryCommand);
 
