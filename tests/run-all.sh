@@ -16,4 +16,5 @@ ATOLLOG_FUZZ_JOBS="$jobs" bash tests/fuzz/run-fuzzers.sh 60
 
 cmake --preset ci-sanitize
 cmake --build --preset ci-sanitize -j "$jobs"
-ASAN_OPTIONS=detect_leaks=1 UBSAN_OPTIONS=print_stacktrace=1 ctest --preset ci-sanitize -j "$jobs"
+ASAN_OPTIONS=detect_leaks=1 LSAN_OPTIONS=suppressions="$PWD/tests/lsan-suppressions.txt" \
+    UBSAN_OPTIONS=print_stacktrace=1 ctest --preset ci-sanitize -j "$jobs"

@@ -288,14 +288,14 @@ TEST_CASE("range extension widens picks outward only", "[unit][biostrat][picks][
     // C = 0.5 [F]: alpha = 0.080060, reach 0.72054 m: 20 - 0.72 = 19.28 m lies inside the plain
     // bracket 19-20 m, so the extended bracket stays at the absent sample (never narrows).
     s.range_extension_confidence = 0.5;
-    const DatumPick& half = pickOf(pickDatums(d, s), "VEA-4", "T TW");
+    const DatumPick half = pickOf(pickDatums(d, s), "VEA-4", "T TW");
     CHECK_THAT(*half.extension_fraction, WithinAbs(0.080060, 1e-6));
     CHECK_THAT(half.extended.shallow_m, WithinAbs(19.0, kTol_m));
 
     // A top extended above the collar is clipped at 0 m: OTH at 5, 19 and 30 m, H = 3,
     // alpha(0.95) = 0.05^(-1/2) - 1 = 3.4721 [F], reach 25 x 3.4721 = 86.8 m.
     s.range_extension_confidence = 0.95;
-    const DatumPick& clipped = pickOf(pickDatums(d, s), "VEA-4", "T OTH");
+    const DatumPick clipped = pickOf(pickDatums(d, s), "VEA-4", "T OTH");
     CHECK(clipped.open_ended);
     CHECK_THAT(clipped.extended.shallow_m, WithinAbs(0.0, kTol_m));
 }
@@ -303,7 +303,7 @@ TEST_CASE("range extension widens picks outward only", "[unit][biostrat][picks][
 TEST_CASE("a single horizon leaves the extension undefined", "[unit][biostrat][extension]") {
     BiostratSettings s;
     s.range_extension_confidence = 0.95;
-    const DatumPick& p = pickOf(pickDatums(pickDataset(), s), "VEA-2", "B TZ");
+    const DatumPick p = pickOf(pickDatums(pickDataset(), s), "VEA-2", "B TZ");
     CHECK(p.horizon_count == 1);
     CHECK(p.extension_undefined);
     CHECK_FALSE(p.extension_fraction.has_value());

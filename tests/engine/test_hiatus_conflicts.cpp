@@ -364,7 +364,7 @@ TEST_CASE("a base at the basement contact is truncated and no tie", "[unit][bios
 
     // Without S11 the base of G is open below: nothing examined bounds it short of the basement.
     d.samples.pop_back();
-    const DatumPick& open = pickOf(pickDatums(d, {}), "B G");
+    const DatumPick open = pickOf(pickDatums(d, {}), "B G");
     CHECK(open.widened.open_deep);
     CHECK(open.truncated_at_basement);
 }

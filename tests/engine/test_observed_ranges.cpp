@@ -69,7 +69,7 @@ TEST_CASE("observed range from in-place occurrences only", "[unit][biostrat][ran
 }
 
 TEST_CASE("a taxon seen only reworked or caved has no range", "[unit][biostrat][ranges]") {
-    const ObservedRange& kb = rangeOf(observeRanges(rangeDataset(), BiostratSettings{}), "KB");
+    const ObservedRange kb = rangeOf(observeRanges(rangeDataset(), BiostratSettings{}), "KB");
     CHECK_FALSE(kb.highest.has_value());
     CHECK_FALSE(kb.lowest.has_value());
     CHECK(kb.horizon_count == 0);
@@ -82,7 +82,7 @@ TEST_CASE("abundance thresholds narrow the range", "[unit][biostrat][ranges]") {
     BiostratSettings s;
     s.min_abundance_class = AbundanceClass::Common; // few at E2 fails, abundant at E2b passes
     s.min_abundance_count = 50;                     // 40 at E3 fails
-    const ObservedRange& ka = rangeOf(observeRanges(rangeDataset(), s), "KA");
+    const ObservedRange ka = rangeOf(observeRanges(rangeDataset(), s), "KA");
     CHECK(ka.highest->sample == "E2b");
     CHECK(ka.lowest->sample == "E4");
     CHECK(ka.horizon_count == 2);
@@ -92,7 +92,7 @@ TEST_CASE("abundance thresholds narrow the range", "[unit][biostrat][ranges]") {
     // Only a class threshold: counts pass whatever their size.
     s.min_abundance_count.reset();
     s.min_abundance_class = AbundanceClass::Dominant;
-    const ObservedRange& dom = rangeOf(observeRanges(rangeDataset(), s), "KA");
+    const ObservedRange dom = rangeOf(observeRanges(rangeDataset(), s), "KA");
     CHECK(dom.highest->sample == "E3");
     CHECK(dom.lowest->sample == "E3");
 }
