@@ -79,7 +79,10 @@ draw::AgeDepthTie plotTie(const AgeTie& t, bool outlier, bool excluded) {
             excluded};
 }
 
-void drawPlot(const AgeModel& m, const HoleModelInputs& in, const fs::path& out) {
+/// Above this many ties the labels crowd each other: they are left off unless asked for.
+constexpr std::size_t kMaxLabelledTies = 30;
+
+void drawPlot(const AgeModel& m, const HoleModelInputs& in, const fs::path& out, bool labels) {
     draw::AgeDepthPlotInput p;
     p.hole = m.hole;
     p.top_m = 0;
@@ -96,7 +99,9 @@ void drawPlot(const AgeModel& m, const HoleModelInputs& in, const fs::path& out)
         if (h.duration_q500_myr && h.probability_positive >= 0.5 && h.depth_m <= p.base_m)
             p.hiatuses.push_back({h.depth_m, *h.duration_q500_myr, "H" + std::to_string(++n)});
     ensureGuiApplication();
-    const auto list = draw::layoutAgeDepthPlot(p);
+    draw::AgeDepthPlotStyle style;
+    style.show_tie_labels = labels || p.ties.size() <= kMaxLabelledTies;
+    const auto list = draw::layoutAgeDepthPlot(p, style);
     std::string ext = out.extension().string();
     std::transform(ext.begin(), ext.end(), ext.begin(), [](unsigned char c) { return std::tolower(c); });
     const std::string title = "Age-depth model, hole " + m.hole;
@@ -114,6 +119,7 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
         std::string hole;
         std::string by = "summary";
         fs::path plot;
+        bool plot_labels = false;
         bool csv = false;
         bool no_store = false;
         AgeModelOptions model;
@@ -133,6 +139,8 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
         ->check(CLI::IsMember({"summary", "grid", "sample", "hiatus", "tie"}))
         ->capture_default_str();
     sub->add_option("--plot", o->plot, "Draw the age-depth plot of --hole to this .svg, .png or .pdf");
+    sub->add_flag("--plot-labels", o->plot_labels,
+                  "Label every tie in the plot (by default only when there are at most 30)");
     sub->add_flag("--csv", o->csv, "Print CSV instead of an aligned table");
     sub->add_flag("--no-store", o->no_store, "Do not store the models in the project");
     addAgeModelOptions(*sub, o->model);
@@ -211,7 +219,7 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
         }
 
         if (!o->plot.empty()) {
-            drawPlot(models.front(), inputs.front(), o->plot);
+            drawPlot(models.front(), inputs.front(), o->plot, o->plot_labels);
             (csv ? io.err : io.out) << "drew the age-depth plot of " << o->hole << " to "
                                     << o->plot.string() << '\n';
         }
