@@ -237,7 +237,7 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
         }
         std::vector<db::StoredAgeModel> stored;
         for (std::size_t i = 0; i < models.size(); ++i) stored.push_back(toStored(models[i], inputs[i], data));
-        run.summary = std::to_string(models.size()) + " holes";
+        run.summary = std::to_string(models.size()) + (models.size() == 1 ? " hole" : " holes");
         note << "stored the age models as run #" << db::storeAgeModels(store, run, stored) << '\n';
         return int(kOk);
     };
