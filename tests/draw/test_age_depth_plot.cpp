@@ -1,5 +1,6 @@
 // The age-depth plot: geometry and structure on the display list, then the file backends.
 // Hole, ties and ages are invented for the tests.
+#include "display_list_queries.hpp"
 #include "draw/age_depth_plot.hpp"
 #include "draw/age_depth_plot_envelope.hpp"
 #include "draw/age_depth_plot_labels.hpp"
@@ -22,6 +23,8 @@
 #include <stdexcept>
 
 using namespace atollog::draw;
+using atollog::draw::test::itemsOf;
+using atollog::draw::test::onlyItem;
 using atollog::draw::test::testOutputDir;
 namespace sym = atollog::draw::age_plot_symbols;
 
@@ -69,28 +72,6 @@ AgeDepthPlotInput sampleAgeDepthPlot() {
     return in;
 }
 
-template <class T> std::vector<const T *> itemsOf(const DisplayList &list, ItemRole role) {
-    std::vector<const T *> out;
-    for (const DisplayItem *item : list.withRole(role)) {
-        if (const T *typed = std::get_if<T>(item)) {
-            out.push_back(typed);
-        }
-    }
-    return out;
-}
-
-template <class T>
-const T &onlyItem(const DisplayList &list, ItemRole role, const std::string &key) {
-    const T *found = nullptr;
-    for (const T *item : itemsOf<T>(list, role)) {
-        if (item->tag.key == key) {
-            REQUIRE(found == nullptr);
-            found = item;
-        }
-    }
-    REQUIRE(found != nullptr);
-    return *found;
-}
 
 std::set<std::string> legendTexts(const DisplayList &list) {
     std::set<std::string> out;

@@ -1,4 +1,5 @@
 // Structure of a laid-out range chart, checked on the display list (no pixels).
+#include "display_list_queries.hpp"
 #include "draw/group_palette.hpp"
 #include "draw/range_chart.hpp"
 #include "sample_range_chart.hpp"
@@ -10,33 +11,13 @@
 #include <stdexcept>
 
 using namespace atollog::draw;
+using atollog::draw::test::itemsOf;
+using atollog::draw::test::onlyItem;
 using atollog::draw::test::sampleRangeChart;
 using Catch::Matchers::WithinAbs;
 
 namespace {
 
-template <class T> std::vector<const T *> itemsOf(const DisplayList &list, ItemRole role) {
-    std::vector<const T *> out;
-    for (const DisplayItem *item : list.withRole(role)) {
-        if (const T *typed = std::get_if<T>(item)) {
-            out.push_back(typed);
-        }
-    }
-    return out;
-}
-
-template <class T>
-const T &onlyItem(const DisplayList &list, ItemRole role, const std::string &key) {
-    const T *found = nullptr;
-    for (const T *item : itemsOf<T>(list, role)) {
-        if (item->tag.key == key) {
-            REQUIRE(found == nullptr);
-            found = item;
-        }
-    }
-    REQUIRE(found != nullptr);
-    return *found;
-}
 
 std::vector<std::string> legendTexts(const DisplayList &list) {
     std::vector<std::string> out;
