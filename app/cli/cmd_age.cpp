@@ -3,6 +3,7 @@
 // drawn as an age-depth plot.
 #include "cli/age_model_inputs.hpp"
 #include "cli/command.hpp"
+#include "cli/figure_file.hpp"
 #include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
@@ -11,7 +12,6 @@
 #include "atollog/db/project_store.hpp"
 #include "atollog/db/tie_point_store.hpp"
 #include "draw/age_depth_plot.hpp"
-#include "draw/display_list_export.hpp"
 
 #include <algorithm>
 #include <filesystem>
@@ -102,13 +102,8 @@ void drawPlot(const AgeModel& m, const HoleModelInputs& in, const fs::path& out,
     draw::AgeDepthPlotStyle style;
     style.show_tie_labels = labels || p.ties.size() <= kMaxLabelledTies;
     const auto list = draw::layoutAgeDepthPlot(p, style);
-    std::string ext = out.extension().string();
-    std::transform(ext.begin(), ext.end(), ext.begin(), [](unsigned char c) { return std::tolower(c); });
-    const std::string title = "Age-depth model, hole " + m.hole;
-    if (ext == ".svg") draw::exportSvg(list, out, title);
-    else if (ext == ".png") draw::exportPng(list, out, 200);
-    else if (ext == ".pdf") draw::exportPdf(list, out, draw::PdfPageSize::FitChart, title);
-    else throw std::invalid_argument("--plot '" + out.string() + "': the file name must end in .svg, .png or .pdf");
+    writeFigure(list, out, "--plot", "Age-depth model, hole " + m.hole, 200,
+                draw::PdfPageSize::FitChart);
 }
 
 } // namespace
@@ -230,9 +225,8 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
         run.seed = o->model.seed;
         run.inputs_sha256 = db::ProjectStore::datasetHash(data);
         std::ostream& note = csv ? io.err : io.out;
-        const auto latest = db::latestModelRun(store, "age-model");
-        if (latest && latest->settings == run.settings && latest->inputs_sha256 == run.inputs_sha256) {
-            note << "age models unchanged since run #" << latest->id << '\n';
+        if (const auto same = db::sameLatestRun(store, run)) {
+            note << "age models unchanged since run #" << same->id << '\n';
             return int(kOk);
         }
         std::vector<db::StoredAgeModel> stored;

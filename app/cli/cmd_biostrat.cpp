@@ -183,9 +183,8 @@ CommandRun addDatumsCommand(CLI::App& app, const CommandIo& io) {
         run.settings = biostratSettingsText(settings);
         run.inputs_sha256 = db::ProjectStore::datasetHash(loaded.data);
         std::ostream& note = csv ? io.err : io.out;
-        const auto latest = db::latestModelRun(loaded.store, "datums");
-        if (latest && latest->settings == run.settings && latest->inputs_sha256 == run.inputs_sha256) {
-            note << "tie points unchanged since run #" << latest->id << '\n';
+        if (const auto same = db::sameLatestRun(loaded.store, run)) {
+            note << "tie points unchanged since run #" << same->id << '\n';
             return int(kOk);
         }
         run.summary = std::to_string(result.ties.size()) + " tie points from " +

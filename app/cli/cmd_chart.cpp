@@ -2,11 +2,11 @@
 #include "cli/biostrat_options.hpp"
 #include "cli/chart_input.hpp"
 #include "cli/command.hpp"
+#include "cli/figure_file.hpp"
 #include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 
 #include "atollog/db/project_store.hpp"
-#include "draw/display_list_export.hpp"
 #include "draw/range_chart.hpp"
 
 #include <algorithm>
@@ -49,11 +49,7 @@ CommandRun addChartCommand(CLI::App& app, const CommandIo& io) {
         ->capture_default_str();
     addBiostratOptions(*sub, o->biostrat);
     return [o, &io]() {
-        std::string ext = o->out.extension().string();
-        std::transform(ext.begin(), ext.end(), ext.begin(), [](unsigned char c) { return std::tolower(c); });
-        if (ext != ".svg" && ext != ".png" && ext != ".pdf")
-            throw std::invalid_argument("--out '" + o->out.string() +
-                                        "': the file name must end in .svg, .png or .pdf");
+        figureFormatOf(o->out, "--out"); // refuse a bad name before any work
         const auto store = db::ProjectStore::open(o->project);
         const CoreDataset data = store.loadDataset();
         if (std::none_of(data.holes.begin(), data.holes.end(),
@@ -64,18 +60,11 @@ CommandRun addChartCommand(CLI::App& app, const CommandIo& io) {
 
         ensureGuiApplication();
         const draw::DisplayList chart = draw::layoutRangeChart(input);
-        const std::string title = "Range chart, hole " + o->hole;
-        if (ext == ".svg") {
-            draw::exportSvg(chart, o->out, title);
-        } else if (ext == ".png") {
-            draw::exportPng(chart, o->out, o->dpi);
-        } else {
-            const auto page = o->page == "a4"       ? draw::PdfPageSize::A4
-                              : o->page == "a3"     ? draw::PdfPageSize::A3
-                              : o->page == "letter" ? draw::PdfPageSize::Letter
-                                                    : draw::PdfPageSize::FitChart;
-            draw::exportPdf(chart, o->out, page, title);
-        }
+        const auto page = o->page == "a4"       ? draw::PdfPageSize::A4
+                          : o->page == "a3"     ? draw::PdfPageSize::A3
+                          : o->page == "letter" ? draw::PdfPageSize::Letter
+                                                : draw::PdfPageSize::FitChart;
+        writeFigure(chart, o->out, "--out", "Range chart, hole " + o->hole, o->dpi, page);
         io.out << "drew " << input.taxa.size() << " taxa and " << input.picks.size()
                << " picks of hole " << o->hole << " to " << o->out.string() << '\n';
         return int(kOk);

@@ -81,9 +81,8 @@ CommandRun addDatesCommand(CLI::App& app, const CommandIo& io) {
         run.seed = o->dates.seed;
         run.inputs_sha256 = db::ProjectStore::datasetHash(data);
         std::ostream& note = csv ? io.err : io.out;
-        const auto latest = db::latestModelRun(store, "dates");
-        if (latest && latest->settings == run.settings && latest->inputs_sha256 == run.inputs_sha256) {
-            note << "dates unchanged since run #" << latest->id << '\n';
+        if (const auto same = db::sameLatestRun(store, run)) {
+            note << "dates unchanged since run #" << same->id << '\n';
             return int(kOk);
         }
         run.summary = std::to_string(ages.size()) + " dates, " + std::to_string(used) +

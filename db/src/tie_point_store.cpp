@@ -70,4 +70,11 @@ std::optional<ModelRunRecord> latestModelRun(const ProjectStore& store, std::str
     return latest;
 }
 
+std::optional<ModelRunRecord> sameLatestRun(const ProjectStore& store, const ModelRunRecord& run) {
+    auto latest = latestModelRun(store, run.kind);
+    if (latest && latest->settings == run.settings && latest->inputs_sha256 == run.inputs_sha256)
+        return latest;
+    return std::nullopt;
+}
+
 } // namespace atollog::db

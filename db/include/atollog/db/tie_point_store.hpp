@@ -21,4 +21,8 @@ std::vector<TiePoint> loadTiePoints(ProjectStore& store, std::int64_t run_id);
 /// The most recent run of this kind, if any.
 std::optional<ModelRunRecord> latestModelRun(const ProjectStore& store, std::string_view kind);
 
+/// The latest run of run.kind when it had the same settings and inputs hash as `run`: the
+/// results it stored still stand, so a command need not store them again.
+std::optional<ModelRunRecord> sameLatestRun(const ProjectStore& store, const ModelRunRecord& run);
+
 } // namespace atollog::db
