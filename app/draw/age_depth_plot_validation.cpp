@@ -1,4 +1,5 @@
 #include "draw/age_depth_plot_validation.hpp"
+#include "draw/metres_text.hpp"
 
 #include <cmath>
 #include <cstdio>
@@ -8,12 +9,6 @@
 namespace atollog::draw {
 
 namespace {
-
-std::string metres(double v) {
-    char buf[64];
-    std::snprintf(buf, sizeof buf, "%.3f m", v);
-    return buf;
-}
 
 std::string megayears(double v) {
     char buf[64];
@@ -30,8 +25,8 @@ void requireOnDepthAxis(const AgeDepthPlotInput &in, double depth_m, const std::
         fail(in, what + " is not a finite depth");
     }
     if (depth_m < in.top_m || depth_m > in.base_m) {
-        fail(in, what + " at " + metres(depth_m) + " lies outside the depth axis " +
-                     metres(in.top_m) + " to " + metres(in.base_m));
+        fail(in, what + " at " + metresText(depth_m) + " lies outside the depth axis " +
+                     metresText(in.top_m) + " to " + metresText(in.base_m));
     }
 }
 
@@ -49,8 +44,8 @@ void requireOnAgeAxis(const AgeDepthPlotInput &in, double age_ma, const std::str
 
 void validateAxes(const AgeDepthPlotInput &in) {
     if (!std::isfinite(in.top_m) || !std::isfinite(in.base_m) || in.base_m <= in.top_m) {
-        fail(in, "the depth axis base " + metres(in.base_m) + " must lie below its top " +
-                     metres(in.top_m));
+        fail(in, "the depth axis base " + metresText(in.base_m) + " must lie below its top " +
+                     metresText(in.top_m));
     }
     if (!std::isfinite(in.scale_ratio) || in.scale_ratio <= 0.0) {
         fail(in, "the depth scale 1:N needs a positive N, got " + std::to_string(in.scale_ratio));
@@ -79,18 +74,18 @@ void validateModel(const AgeDepthPlotInput &in) {
         requireOnAgeAxis(in, p.age_q500_ma, name + " median age");
         requireOnAgeAxis(in, p.age_q975_ma, name + " 97.5 % age");
         if (!(p.age_q025_ma <= p.age_q500_ma && p.age_q500_ma <= p.age_q975_ma)) {
-            fail(in, name + " at " + metres(p.depth_m) + " has quantiles out of order: 2.5 % " +
+            fail(in, name + " at " + metresText(p.depth_m) + " has quantiles out of order: 2.5 % " +
                          megayears(p.age_q025_ma) + ", median " + megayears(p.age_q500_ma) +
                          ", 97.5 % " + megayears(p.age_q975_ma));
         }
         if (i > 0 && p.depth_m < in.model[i - 1].depth_m) {
-            fail(in, name + " at " + metres(p.depth_m) + " lies above the point before it at " +
-                         metres(in.model[i - 1].depth_m) + "; the grid must be in depth order");
+            fail(in, name + " at " + metresText(p.depth_m) + " lies above the point before it at " +
+                         metresText(in.model[i - 1].depth_m) + "; the grid must be in depth order");
         }
     }
     if (in.model.back().depth_m <= in.model.front().depth_m) {
         fail(in, "the age model grid spans no depth (all points at " +
-                     metres(in.model.front().depth_m) + ")");
+                     metresText(in.model.front().depth_m) + ")");
     }
 }
 
@@ -104,8 +99,8 @@ void validateTies(const AgeDepthPlotInput &in) {
         requireOnDepthAxis(in, t.shallow_m, name + " shallow end");
         requireOnDepthAxis(in, t.deep_m, name + " deep end");
         if (t.deep_m < t.shallow_m) {
-            fail(in, name + " deep end " + metres(t.deep_m) + " lies above its shallow end " +
-                         metres(t.shallow_m));
+            fail(in, name + " deep end " + metresText(t.deep_m) + " lies above its shallow end " +
+                         metresText(t.shallow_m));
         }
         requireOnAgeAxis(in, t.age_ma, name + " age");
         requireOnAgeAxis(in, t.age_lo_ma, name + " young end");
@@ -122,7 +117,7 @@ void validateHiatusesAndReference(const AgeDepthPlotInput &in) {
         const std::string name = h.label.empty() ? "hiatus" : "hiatus '" + h.label + "'";
         requireOnDepthAxis(in, h.depth_m, name);
         if (!std::isfinite(h.duration_q500_ma) || h.duration_q500_ma < 0.0) {
-            fail(in, name + " at " + metres(h.depth_m) +
+            fail(in, name + " at " + metresText(h.depth_m) +
                          " needs a finite, non-negative duration, got " +
                          megayears(h.duration_q500_ma));
         }

@@ -43,6 +43,12 @@ enum class ItemRole {
     Hiatus,
     HiatusLabel,
     ReferenceLine,
+    // Hole column (keys: "top-base" in m with two decimals for intervals, e.g. "12.50-14.00";
+    // the surface word for surfaces; "<run id> recovered" / "<run id> unrecovered" for runs).
+    LithologyInterval,
+    Surface,
+    TextureScale, // the texture-class ticks and names above the lithology track
+    DrilledBase,  // the line and label at the hole's drilled base (key: the hole id)
 };
 
 /// The role and the identifier of the datum an item draws (taxon id, event id, sample id).
@@ -59,11 +65,25 @@ struct Stroke {
     DashStyle dash = DashStyle::Solid;
 };
 
-/// Area fills drawn as vector line work (never as bitmaps), so SVG and PDF stay sharp.
-/// Limestone follows the brick pattern 627 of FGDC-STD-013-2006 (section 37); the standard has
-/// no reef pattern, so ReefFramework is atollog's own: rows of small open arcs standing for
-/// coral heads.
-enum class FillPattern { None, Limestone, ReefFramework };
+/// Area fills drawn as vector line work (never as bitmaps), so SVG and PDF stay sharp; each is
+/// anchored at the scene origin, so boxes that touch continue one another. The numbered ones
+/// follow the style of FGDC-STD-013-2006 section 37 (numbers and names checked against a
+/// transcription of the standard's pattern chart; the line work is drawn from memory, see
+/// fill_pattern_painter.cpp): Limestone 627, Dolostone 642, Sand 607 (massive sand or
+/// sandstone), Clay 620 (clay or clay shale), Gravel 601 (gravel or conglomerate), Basalt 717
+/// (basaltic flows), Volcaniclastic 711 (tuffaceous rock). The standard has no reef pattern, so
+/// ReefFramework is atollog's own: rows of small open arcs standing for coral heads.
+enum class FillPattern {
+    None,
+    Limestone,
+    Dolostone,
+    Sand,
+    Clay,
+    Gravel,
+    Basalt,
+    Volcaniclastic,
+    ReefFramework,
+};
 
 struct Rect {
     RectMm box;

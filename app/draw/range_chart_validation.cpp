@@ -1,4 +1,5 @@
 #include "draw/range_chart_validation.hpp"
+#include "draw/metres_text.hpp"
 
 #include <cmath>
 #include <cstdio>
@@ -10,12 +11,6 @@ namespace atollog::draw {
 
 namespace {
 
-std::string metres(double v) {
-    char buf[64];
-    std::snprintf(buf, sizeof buf, "%.3f m", v);
-    return buf;
-}
-
 [[noreturn]] void fail(const RangeChartInput &in, const std::string &what) {
     throw std::invalid_argument("range chart of hole '" + in.hole + "': " + what);
 }
@@ -25,8 +20,8 @@ void requireInSection(const RangeChartInput &in, double depth_m, const std::stri
         fail(in, what + " is not a finite depth");
     }
     if (depth_m < in.top_m || depth_m > in.base_m) {
-        fail(in, what + " at " + metres(depth_m) + " lies outside the section " + metres(in.top_m) +
-                     " to " + metres(in.base_m));
+        fail(in, what + " at " + metresText(depth_m) + " lies outside the section " + metresText(in.top_m) +
+                     " to " + metresText(in.base_m));
     }
 }
 
@@ -34,8 +29,8 @@ void requireInSection(const RangeChartInput &in, double depth_m, const std::stri
 
 void validateRangeChartInput(const RangeChartInput &in) {
     if (!std::isfinite(in.top_m) || !std::isfinite(in.base_m) || in.base_m <= in.top_m) {
-        fail(in, "the section base " + metres(in.base_m) + " must lie below its top " +
-                     metres(in.top_m));
+        fail(in, "the section base " + metresText(in.base_m) + " must lie below its top " +
+                     metresText(in.top_m));
     }
     if (!std::isfinite(in.scale_ratio) || in.scale_ratio <= 0.0) {
         fail(in, "the depth scale 1:N needs a positive N, got " + std::to_string(in.scale_ratio));
@@ -44,8 +39,8 @@ void validateRangeChartInput(const RangeChartInput &in) {
         requireInSection(in, r.top_m, "recovery interval top");
         requireInSection(in, r.base_m, "recovery interval base");
         if (r.base_m < r.top_m) {
-            fail(in, "recovery interval base " + metres(r.base_m) + " lies above its top " +
-                         metres(r.top_m));
+            fail(in, "recovery interval base " + metresText(r.base_m) + " lies above its top " +
+                         metresText(r.top_m));
         }
     }
     for (const ChartSample &s : in.samples) {
@@ -59,7 +54,7 @@ void validateRangeChartInput(const RangeChartInput &in) {
         for (const ChartOccurrence &o : t.occurrences) {
             requireInSection(in, o.depth_m, "occurrence of taxon '" + t.id + "'");
             if (o.abundance_rank < 0 || o.abundance_rank > 5) {
-                fail(in, "occurrence of taxon '" + t.id + "' at " + metres(o.depth_m) +
+                fail(in, "occurrence of taxon '" + t.id + "' at " + metresText(o.depth_m) +
                              " has abundance rank " + std::to_string(o.abundance_rank) +
                              ", expected 0 to 5");
             }
@@ -74,19 +69,19 @@ void validateRangeChartInput(const RangeChartInput &in) {
         requireInSection(in, p.shallow_m, name + " shallow end");
         requireInSection(in, p.deep_m, name + " deep end");
         if (p.shallow_m > p.depth_m || p.depth_m > p.deep_m) {
-            fail(in, name + " quotes " + metres(p.depth_m) + " outside its interval " +
-                         metres(p.shallow_m) + " to " + metres(p.deep_m));
+            fail(in, name + " quotes " + metresText(p.depth_m) + " outside its interval " +
+                         metresText(p.shallow_m) + " to " + metresText(p.deep_m));
         }
         // An extended interval may reach beyond the section (a correlation can push a datum
         // above the first core); the layout clips it to the section.
         if (p.extended_shallow_m &&
             !(std::isfinite(*p.extended_shallow_m) && *p.extended_shallow_m <= p.shallow_m)) {
             fail(in, name + " extended shallow end must be finite and not below " +
-                         metres(p.shallow_m));
+                         metresText(p.shallow_m));
         }
         if (p.extended_deep_m &&
             !(std::isfinite(*p.extended_deep_m) && *p.extended_deep_m >= p.deep_m)) {
-            fail(in, name + " extended deep end must be finite and not above " + metres(p.deep_m));
+            fail(in, name + " extended deep end must be finite and not above " + metresText(p.deep_m));
         }
     }
 }
