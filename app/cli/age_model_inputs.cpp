@@ -60,7 +60,8 @@ AgeModelSettings AgeModelOptions::settings() const {
     s.draws = draws;
     s.seed = seed;
     s.grid_step_m = grid_step_m;
-    s.core_top = CoreTopAge{core_top_age_ka.value_or(0.0) / 1e3, core_top_sd_ka / 1e3};
+    s.core_top =
+        CoreTopAge{core_top_age_ka.value_or(0.0) / 1e3, core_top_sd_ka / 1e3, core_top_open};
     s.extrapolate_below = extrapolate_below;
     s.threads = threads;
     s.outlier_draws = outlier_draws;
@@ -73,6 +74,7 @@ std::string AgeModelOptions::settingsText() const {
     out << "age.draws=" << draws << "\nage.seed=" << seed << "\nage.grid_step_m=" << grid_step_m
         << "\nage.core_top_age_ka=" << core_top_age_ka.value_or(0.0)
         << "\nage.core_top_sd_ka=" << core_top_sd_ka
+        << "\nage.core_top_open=" << core_top_open
         << "\nage.extrapolate_below=" << extrapolate_below
         << "\nage.outlier_draws=" << outlier_draws << '\n'
         << biostratSettingsText(biostrat.settings()) << '\n'
@@ -91,6 +93,10 @@ void addAgeModelOptions(CLI::App& sub, AgeModelOptions& o) {
         ->capture_default_str();
     sub.add_option("--core-top-age-ka", o.core_top_age_ka,
                    "Age of the core top (collar) in ka; default present day");
+    sub.add_flag("--core-top-open", o.core_top_open,
+                 "The core top is only known to be no younger than its age (present day or "
+                 "--core-top-age-ka) and no older than the shallowest tie: for a raised, "
+                 "emerged or eroded reef top");
     sub.add_option("--core-top-sd-ka", o.core_top_sd_ka, "Its standard deviation (ka)")
         ->check(CLI::NonNegativeNumber);
     sub.add_flag("--extrapolate-below", o.extrapolate_below,
@@ -139,9 +145,21 @@ std::vector<HoleModelInputs> gatherAgeModelInputs(const CoreDataset& data,
                                             "no age model");
             continue;
         }
-        for (const auto& s : surfacesOfHole(surfaces, h.hole)) in.hiatus_depths_m.push_back(s.depth_m);
+        for (const auto& s : surfacesOfHole(surfaces, h.hole)) {
+            if (s.kind == LoggedSurfaceKind::BasementContact) {
+                if (!in.basement_contact_m || s.depth_m < *in.basement_contact_m)
+                    in.basement_contact_m = s.depth_m;
+                continue; // the engine makes the contact a hiatus itself
+            }
+            in.hiatus_depths_m.push_back(s.depth_m);
+        }
+        for (const auto& r : data.runs)
+            if (r.hole == h.hole)
+                in.section_base_m = std::max(in.section_base_m.value_or(0.0), r.base_m);
         double deepest_m = 0;
         for (const auto& t : in.ties) deepest_m = std::max(deepest_m, t.deep_m);
+        if (in.section_base_m) deepest_m = std::min(deepest_m, *in.section_base_m);
+        if (in.basement_contact_m) deepest_m = std::min(deepest_m, *in.basement_contact_m);
         in.packages = packagesOf(data, h.hole, in.hiatus_depths_m, 0.0, deepest_m);
         out.push_back(std::move(in));
     }
@@ -158,6 +176,8 @@ AgeModel buildHoleModel(const HoleModelInputs& in, const AgeModelOptions& option
     AgeModelSettings s = options.settings();
     s.hiatus_depths_m = in.hiatus_depths_m;
     s.rate_intervals = in.packages;
+    s.basement_contact_m = in.basement_contact_m;
+    s.section_base_m = in.section_base_m;
     return buildAgeModel(in.hole, in.ties, s, keep_draws_at_m);
 }
 

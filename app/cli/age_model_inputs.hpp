@@ -23,6 +23,7 @@ struct AgeModelOptions {
     double grid_step_m = 0.5;
     std::optional<double> core_top_age_ka; ///< unset: the collar is present day
     double core_top_sd_ka = 0;
+    bool core_top_open = false; ///< only bounded: no younger than the core top age
     bool extrapolate_below = false;
     int threads = 1;
     int outlier_draws = 1000;
@@ -42,6 +43,9 @@ struct HoleModelInputs {
     /// Dates with an age that the model leaves out (e.g. a failed d234U screen): shown, not used.
     std::vector<AgeTie> excluded;
     std::vector<double> hiatus_depths_m;
+    /// The logged basement contact (lava dates below it are pooled) and the drilled base.
+    std::optional<double> basement_contact_m;
+    std::optional<double> section_base_m;
     /// The carbonate packages between logged surfaces, clipped to the ties' depth range; a
     /// package is reef framework when most of its logged thickness is a boundstone texture.
     std::vector<RateInterval> packages;

@@ -22,6 +22,7 @@ BiostratSettings BiostratOptions::settings() const {
     s.range_extension_confidence = extend;
     s.cuttings_bases_as_ties = cuttings_bases;
     s.ties_use_extended_bracket = ties_extended;
+    s.surface_picks_as_ties = surface_picks;
     validateBiostratSettings(s);
     return s;
 }
@@ -43,6 +44,9 @@ void addBiostratOptions(CLI::App& sub, BiostratOptions& o) {
                  "Use bases (first occurrences) in cuttings holes as tie points");
     sub.add_flag("--ties-extended", o.ties_extended,
                  "Tie points carry the extended bracket (needs --extend)");
+    sub.add_flag("--surface-picks", o.surface_picks,
+                 "Use picks whose bracket holds a logged surface as tie points (by default "
+                 "not: their datum may be squeezed onto the surface)");
 }
 
 } // namespace atollog::cli

@@ -17,12 +17,14 @@ struct BiostratOptions {
     std::optional<double> extend;
     bool cuttings_bases = false;
     bool ties_extended = false;
+    bool surface_picks = false;
 
     /// The engine settings; throws std::invalid_argument with the option name on a bad value.
     BiostratSettings settings() const;
 };
 
-/// Adds --quote, --min-abundance, --min-count, --extend, --cuttings-bases, --ties-extended.
+/// Adds --quote, --min-abundance, --min-count, --extend, --cuttings-bases, --ties-extended,
+/// --surface-picks.
 void addBiostratOptions(CLI::App& sub, BiostratOptions& options);
 
 } // namespace atollog::cli

@@ -51,7 +51,10 @@ void drawTies(const std::vector<PreparedTie>& ties, std::mt19937_64& rng, TieDra
     for (int i : out.depth_order) {
         const PreparedTie& t = ties[static_cast<std::size_t>(i)];
         TruncatedDraw d;
-        if (t.exact_age) {
+        if (t.open_floor) {
+            // A floor only: it sits at its lowest age and costs the draw nothing.
+            d = TruncatedDraw{std::max(t.age.support_min_ma(), floor), 0.0};
+        } else if (t.exact_age) {
             d = t.age.mean_ma() >= floor ? TruncatedDraw{t.age.mean_ma(), 0.0}
                                          : TruncatedDraw{floor, kMinusInf};
         } else if (t.age.isNormal()) {

@@ -116,7 +116,7 @@ bool trySwap(const std::vector<PreparedTie>& ties, int i, int j, std::mt19937_64
              TieDraw& state) {
     const PreparedTie& ti = ties[static_cast<std::size_t>(i)];
     const PreparedTie& tj = ties[static_cast<std::size_t>(j)];
-    if (ti.exact_age || tj.exact_age)
+    if (ti.exact_age || tj.exact_age || ti.is_core_top || tj.is_core_top)
         return false;
     double& zi = state.depth_m[static_cast<std::size_t>(i)];
     double& zj = state.depth_m[static_cast<std::size_t>(j)];

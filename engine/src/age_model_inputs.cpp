@@ -1,5 +1,7 @@
 #include "age_model_inputs.hpp"
 
+#include "atollog/engine/basement_age.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <sstream>
@@ -46,6 +48,11 @@ void validateSettings(const AgeModelSettings& s) {
     }
     if (s.extrapolate_to_m && (!std::isfinite(*s.extrapolate_to_m) || *s.extrapolate_to_m < 0))
         fail("extrapolate_to_m must be finite and >= 0, got " + num(*s.extrapolate_to_m));
+    if (s.section_base_m && (!std::isfinite(*s.section_base_m) || !(*s.section_base_m > 0)))
+        fail("section_base_m must be finite and > 0, got " + num(*s.section_base_m));
+    if (s.basement_contact_m &&
+        (!std::isfinite(*s.basement_contact_m) || !(*s.basement_contact_m > 0)))
+        fail("basement_contact_m must be finite and > 0, got " + num(*s.basement_contact_m));
     for (double d : s.hiatus_depths_m)
         if (!std::isfinite(d) || d < 0)
             fail("hiatus depth must be finite and >= 0, got " + num(d));
@@ -85,7 +92,12 @@ PreparedModel prepareAgeModel(const std::string& hole, const std::vector<AgeTie>
     PreparedModel m;
     std::vector<PreparedTie> by_mid;
     for (const AgeTie& t : ties)
-        by_mid.push_back(prepareTie(hole, t));
+        by_mid.push_back(prepareTie(hole, t)); // validates before pooling reads any depth
+    if (settings.basement_contact_m) {
+        by_mid.clear();
+        for (const AgeTie& t : poolBasementTies(ties, *settings.basement_contact_m))
+            by_mid.push_back(prepareTie(hole, t));
+    }
     // Why the midpoint: it only sets the order in which ties are first tried; each draw sorts
     // them by the depths it drew, so overlapping brackets may swap.
     std::stable_sort(by_mid.begin(), by_mid.end(), [](const PreparedTie& a, const PreparedTie& b) {
@@ -95,10 +107,23 @@ PreparedModel prepareAgeModel(const std::string& hole, const std::vector<AgeTie>
         PreparedTie top;
         top.label = "core top";
         top.is_core_top = true;
-        top.exact_age = settings.core_top->sd_ma == 0;
-        top.age = top.exact_age ? AgeDistribution::normal(settings.core_top->age_ma, 1.0)
-                                : AgeDistribution::normal(settings.core_top->age_ma,
-                                                          settings.core_top->sd_ma);
+        const CoreTopAge& c = *settings.core_top;
+        if (c.open) {
+            // Flat from the given age to beyond every tie; the order cuts it at the shallowest
+            // tie's age. Two points a quarter and three quarters in put the bin edges at the
+            // ends (age_distribution.cpp).
+            double oldest = c.age_ma;
+            for (const PreparedTie& t : by_mid)
+                oldest = std::max(oldest, t.age.support_max_ma());
+            const double w = std::max(oldest - c.age_ma, 1e-9);
+            top.age = AgeDistribution::gridded({c.age_ma + 0.25 * w, c.age_ma + 0.75 * w},
+                                               {1.0, 1.0});
+            top.open_floor = true;
+        } else {
+            top.exact_age = c.sd_ma == 0;
+            top.age = top.exact_age ? AgeDistribution::normal(c.age_ma, 1.0)
+                                    : AgeDistribution::normal(c.age_ma, c.sd_ma);
+        }
         m.ties.push_back(std::move(top));
     }
     m.ties.insert(m.ties.end(), by_mid.begin(), by_mid.end());
@@ -124,6 +149,10 @@ PreparedModel prepareAgeModel(const std::string& hole, const std::vector<AgeTie>
         for (const RateInterval& r : settings.rate_intervals)
             m.base_m = std::max(m.base_m, r.base_m);
     }
+    if (settings.section_base_m)
+        m.base_m = std::min(m.base_m, *settings.section_base_m);
+    if (settings.basement_contact_m)
+        m.base_m = std::min(m.base_m, *settings.basement_contact_m);
     if (!(m.base_m > m.top_m))
         fail("hole '" + hole + "': the ties span no depth (top " + num(m.top_m) + " m, base " +
              num(m.base_m) + " m)");
@@ -140,6 +169,8 @@ PreparedModel prepareAgeModel(const std::string& hole, const std::vector<AgeTie>
     m.intervals = settings.rate_intervals;
 
     m.surfaces_m = settings.hiatus_depths_m;
+    if (settings.basement_contact_m)
+        m.surfaces_m.push_back(*settings.basement_contact_m);
     std::sort(m.surfaces_m.begin(), m.surfaces_m.end());
     m.surfaces_m.erase(std::unique(m.surfaces_m.begin(), m.surfaces_m.end()), m.surfaces_m.end());
 

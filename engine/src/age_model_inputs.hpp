@@ -17,6 +17,9 @@ struct PreparedTie {
     bool exact_age = false; ///< a core top with sd 0
     AgeDistribution age = AgeDistribution::normal(0.0, 1.0);
     bool is_core_top = false;
+    /// An open core top (CoreTopAge::open): only a floor on the ages below; `age` is flat. It
+    /// has no tail to score and adds no constraint to the acceptance rate.
+    bool open_floor = false;
 };
 
 struct GridNode {

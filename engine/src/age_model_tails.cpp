@@ -20,7 +20,7 @@ TieTail tieTail(const PreparedTie& tie, double depth_q500_m, double age_q500_ma)
     t.label = tie.label;
     t.depth_q500_m = depth_q500_m;
     t.age_q500_ma = age_q500_ma;
-    if (tie.exact_age)
+    if (tie.exact_age || tie.open_floor)
         return t;
     const AgeDistribution& d = tie.age;
     double z = (age_q500_ma - d.mean_ma()) / d.sd_ma();

@@ -51,6 +51,7 @@ std::string biostratSettingsText(const BiostratSettings& s) {
          s.range_extension_confidence ? numberText(*s.range_extension_confidence) : "none");
     line("cuttings_bases_as_ties", s.cuttings_bases_as_ties ? "yes" : "no");
     line("basement_bases_as_ties", s.basement_bases_as_ties ? "yes" : "no");
+    line("surface_picks_as_ties", s.surface_picks_as_ties ? "yes" : "no");
     line("ties_use_extended_bracket", s.ties_use_extended_bracket ? "yes" : "no");
     return out;
 }

@@ -23,6 +23,7 @@ void markTruncatedPicks(std::vector<DatumPick>& picks, const std::vector<LoggedS
         p.truncated_at_surface = false;
         p.surfaces_at_pick.clear();
         p.truncated_at_basement = false;
+        p.extension_reaches_surface = false;
         p.basement_contact_m.reset();
         if (!p.found)
             continue;
@@ -32,6 +33,9 @@ void markTruncatedPicks(std::vector<DatumPick>& picks, const std::vector<LoggedS
         for (const LoggedSurface* s : it->second) {
             if (s->depth_m >= p.widened.shallow_m && s->depth_m <= p.widened.deep_m)
                 p.surfaces_at_pick.push_back(*s);
+            else if (s->kind != LoggedSurfaceKind::BasementContact &&
+                     s->depth_m >= p.extended.shallow_m && s->depth_m <= p.extended.deep_m)
+                p.extension_reaches_surface = true;
             if (s->kind == LoggedSurfaceKind::BasementContact && !p.basement_contact_m)
                 p.basement_contact_m = s->depth_m;
         }
@@ -40,6 +44,9 @@ void markTruncatedPicks(std::vector<DatumPick>& picks, const std::vector<LoggedS
                              return a.depth_m < b.depth_m;
                          });
         p.truncated_at_surface = !p.surfaces_at_pick.empty();
+        // No reef taxon lived in the lava: an extension never reaches below the contact.
+        if (p.basement_contact_m && p.extended.deep_m > *p.basement_contact_m)
+            p.extended.deep_m = std::max(p.widened.deep_m, *p.basement_contact_m);
         p.truncated_at_basement = p.kind == EventKind::Base && p.basement_contact_m &&
                                   (p.widened.open_deep || p.widened.deep_m >= *p.basement_contact_m);
     }

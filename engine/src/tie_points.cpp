@@ -26,6 +26,11 @@ std::vector<TiePoint> makeTiePoints(const std::vector<DatumPick>& picks,
             continue;
         if (p.truncated_at_basement && !settings.basement_bases_as_ties)
             continue;
+        const bool bracket_holds_surface =
+            p.truncated_at_surface ||
+            (settings.ties_use_extended_bracket && p.extension_reaches_surface);
+        if (bracket_holds_surface && !settings.surface_picks_as_ties)
+            continue;
         const DepthBracket& b = settings.ties_use_extended_bracket ? p.extended : p.widened;
         TiePoint t;
         t.hole = p.hole;

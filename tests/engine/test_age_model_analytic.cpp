@@ -84,3 +84,66 @@ TEST_CASE("accretion rate between two ties is thickness over time", "[age_model]
     CHECK(m.rates[1].reef_framework);
     CHECK(m.rates[1].defined_share == Approx(1.0));
 }
+
+TEST_CASE("an open core top is uniform between present and the shallowest tie", "[age_model]") {
+    // Core top only bounded: age A0 ~ U(0, 1) at 0 m (the order cuts the flat prior at the tie);
+    // one tie of practically exact age 1 Ma at 10 m. At 0 m the quantiles are those of U(0, 1);
+    // at 5 m the age (A0 + 1) / 2 ~ U(0.5, 1), so its p-quantile is 0.5 + p / 2.
+    AgeModelSettings s;
+    s.draws = 40000;
+    s.seed = 17;
+    s.outlier_draws = 0;
+    s.core_top = CoreTopAge{0.0, 0.0, true};
+    const AgeModel m = buildAgeModel("H1", {tie("t", 10, 10, 1.0, 1e-6)}, s);
+    CHECK(rowAt(m, 0.0).age_q025_ma == Approx(0.025).margin(0.006));
+    CHECK(rowAt(m, 0.0).age_q500_ma == Approx(0.5).margin(0.01));
+    CHECK(rowAt(m, 0.0).age_q975_ma == Approx(0.975).margin(0.006));
+    CHECK(rowAt(m, 5.0).age_q025_ma == Approx(0.5125).margin(0.004));
+    CHECK(rowAt(m, 5.0).age_q500_ma == Approx(0.75).margin(0.006));
+    CHECK(rowAt(m, 5.0).age_q975_ma == Approx(0.9875).margin(0.004));
+    // A floor costs nothing: every draw respects it, so acceptance stays 1.
+    CHECK(m.acceptance_rate == Approx(1.0).margin(1e-6));
+    for (const TieTail& t : m.tie_tails)
+        CHECK_FALSE(t.likely_outlier);
+}
+
+TEST_CASE("lava dates below the basement contact become one pooled tie at the contact",
+          "[age_model]") {
+    // Reef tie 1.0 Ma at 5 m; contact at 10 m; lava dates 2.0, 2.2, 2.1 Ma (sd 0.1) at 12, 13,
+    // 14 m. Weighted mean (Taylor 1997, eq. 7.10) 2.1 Ma, sd 0.1 / sqrt(3) (eq. 7.12); MSWD
+    // (Wendt & Carl 1991) = (1 + 1 + 0) / 2 = 1, so no widening. The model ends at the contact,
+    // where the age from below is that normal.
+    AgeModelSettings s;
+    s.draws = 40000;
+    s.seed = 23;
+    s.outlier_draws = 0;
+    s.core_top.reset();
+    s.basement_contact_m = 10.0;
+    const AgeModel m = buildAgeModel("H1",
+                                     {tie("reef", 5, 5, 1.0, 0.01), tie("lava a", 12, 12, 2.0, 0.1),
+                                      tie("lava b", 13, 13, 2.2, 0.1), tie("lava c", 14, 14, 2.1, 0.1)},
+                                     s);
+    CHECK(m.grid.back().depth_m == Approx(10.0));
+    const double sd = 0.1 / std::sqrt(3.0);
+    const AgeGridRow& below = rowAt(m, 10.0);
+    CHECK(below.age_q500_ma == Approx(2.1).margin(0.05 * sd));
+    CHECK(below.age_q975_ma == Approx(2.1 + 1.959964 * sd).margin(0.08 * sd));
+    REQUIRE(m.hiatuses.size() == 1);
+    CHECK(m.hiatuses.front().depth_m == Approx(10.0));
+    bool pooled = false;
+    for (const TieTail& t : m.tie_tails)
+        pooled |= t.label == "basement (3 dates, MSWD 1)";
+    CHECK(pooled);
+}
+
+TEST_CASE("the model never reaches below the drilled base", "[age_model]") {
+    AgeModelSettings s;
+    s.draws = 2000;
+    s.outlier_draws = 0;
+    s.section_base_m = 20.0;
+    const AgeModel m = buildAgeModel("H1", {tie("wide", 10, 30, 1.0, 0.01)}, s);
+    CHECK(m.grid.back().depth_m == Approx(20.0));
+    s.section_base_m = -1.0;
+    CHECK_THROWS_WITH(buildAgeModel("H1", {tie("wide", 10, 30, 1.0, 0.01)}, s),
+                      Catch::Contains("section_base_m"));
+}

@@ -337,6 +337,7 @@ TEST_CASE("settings render as key=value lines", "[unit][biostrat][settings]") {
                                      "biostrat.range_extension_confidence=none\n"
                                      "biostrat.cuttings_bases_as_ties=no\n"
                                      "biostrat.basement_bases_as_ties=no\n"
+                                     "biostrat.surface_picks_as_ties=no\n"
                                      "biostrat.ties_use_extended_bracket=no\n");
     s.depth_quote = PickDepthQuote::SampleBase;
     s.min_abundance_class = AbundanceClass::Common;

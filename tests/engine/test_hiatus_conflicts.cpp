@@ -153,10 +153,16 @@ TEST_CASE("a base and a top squeezed onto an exposure surface are flagged, not i
     const PickConflictReport review = reviewPickConflicts(d, picks);
     CHECK(review.conflicts.empty());
     CHECK(review.explained.empty()); // the brackets overlap: nothing to explain
+    // By default a pick squeezed onto a surface dates neither side: no tie. Asked for, the tie
+    // is kept and flagged.
     const auto ties = makeTiePoints(picks, review.conflicts, {});
+    BiostratSettings with_surface_picks;
+    with_surface_picks.surface_picks_as_ties = true;
+    const auto kept = makeTiePoints(picks, review.conflicts, with_surface_picks);
     for (const char* event : {"B A", "T B"}) {
-        const TiePoint* t = tieOf(ties, event);
-        REQUIRE(t != nullptr); // a surface truncation keeps the tie, flagged
+        CHECK(tieOf(ties, event) == nullptr);
+        const TiePoint* t = tieOf(kept, event);
+        REQUIRE(t != nullptr);
         CHECK(tieFlagsText(*t) == "at_surface");
     }
 
@@ -321,6 +327,7 @@ TEST_CASE("a base at the basement contact is truncated and no tie", "[unit][bios
     CHECK(tieOf(ties, "B H")->flags.empty());
     REQUIRE(tieOf(ties, "T G") != nullptr);
     s.basement_bases_as_ties = true;
+    s.surface_picks_as_ties = true; // its bracket holds the erosion surface as well
     const auto with_bases = makeTiePoints(picks, findPickConflicts(d, picks), s);
     REQUIRE(tieOf(with_bases, "B G") != nullptr);
     CHECK(tieFlagsText(*tieOf(with_bases, "B G")) == "at_surface;at_basement");
@@ -399,4 +406,44 @@ TEST_CASE("a base truncated at the basement explains its place above younger pic
     older.truncated_at_basement = true;
     younger.hole = "VEB-3"; // picks of different holes are never compared
     CHECK_FALSE(explainInversion(older, younger, none));
+}
+
+TEST_CASE("a range extension stops at the basement and a surface it reaches costs the tie",
+          "[unit][biostrat][hiatus]") {
+    // Hole VEX-1: limestone 0-6 m with an exposure surface at its base, limestone 6-8 m, basalt
+    // 8-12 m. Taxon X in S1..S3 (1, 2, 3 m), absent in S4 (4 m): base bracket 3-4 m. With three
+    // horizons the 95 % extension is alpha = 0.05^(-1/2) - 1 = 3.47 (Strauss & Sadler 1989,
+    // eq. for the confidence interval on a range end) of the 2 m observed range, 6.9 m: it would
+    // reach 10.9 m, inside the lava, where no reef taxon lived.
+    CoreDataset d;
+    d.holes = {makeHole("VEX-1")};
+    LithInterval upper = makeInterval("VEX-1", 0.0, 6.0, Rock::Limestone);
+    upper.base_surface = Surface::Exposure;
+    d.intervals = {upper, makeInterval("VEX-1", 6.0, 8.0, Rock::Limestone),
+                   makeInterval("VEX-1", 8.0, 12.0, Rock::Basalt)};
+    for (int i = 1; i <= 4; ++i) {
+        const std::string id = "S" + std::to_string(i);
+        d.samples.push_back(makeSample("VEX-1", id, i, i));
+        d.occurrences.push_back(makeOccurrence(id, i <= 3 ? "X" : "R"));
+    }
+    d.events = {makeEvent("B X", "X", EventKind::Base, 2.0, 0.05)};
+    BiostratSettings s;
+    s.range_extension_confidence = 0.95;
+    const auto picks = pickDatums(d, s);
+    const DatumPick& p = pickOf(picks, "B X");
+    CHECK_THAT(p.widened.deep_m, WithinAbs(4.0, kTol_m));
+    CHECK_THAT(p.extended.deep_m, WithinAbs(8.0, kTol_m)); // cut at the contact
+    CHECK_FALSE(p.truncated_at_surface);                   // the widened bracket holds none
+    CHECK(p.extension_reaches_surface);                    // the extension holds the 6 m one
+
+    s.ties_use_extended_bracket = true;
+    CHECK(tieOf(makeTiePoints(picks, {}, s), "B X") == nullptr);
+    s.surface_picks_as_ties = true;
+    const auto kept = makeTiePoints(picks, {}, s);
+    REQUIRE(tieOf(kept, "B X") != nullptr);
+    CHECK_THAT(tieOf(kept, "B X")->deep_m, WithinAbs(8.0, kTol_m));
+    // Plain (widened) ties do not look at the extension.
+    s.ties_use_extended_bracket = false;
+    s.surface_picks_as_ties = false;
+    CHECK(tieOf(makeTiePoints(picks, {}, s), "B X") != nullptr);
 }

@@ -9,10 +9,14 @@
 namespace atollog {
 
 /// The age of the core top (depth 0, the collar), treated as one more tie: a point in depth with
-/// a normal age, or an exact age when sd_ma is 0.
+/// a normal age, or an exact age when sd_ma is 0; or, when `open`, only bounded: no younger than
+/// age_ma and no older than the shallowest tie (uniform between, sd_ma unused). Why open: a
+/// raised, emerged or eroded reef top stopped growing at an unknown time, and pinning it to the
+/// present would pull every age above the shallowest tie too young.
 struct CoreTopAge {
-    double age_ma = 0; ///< 0: the core top is "now"
+    double age_ma = 0; ///< 0: the core top is "now" (or, when open, no younger than now)
     double sd_ma = 0;
+    bool open = false;
 };
 
 struct AgeModelSettings {
@@ -27,6 +31,16 @@ struct AgeModelSettings {
     /// extrapolate_to_m (or the deepest kept depth or rate interval, if deeper).
     bool extrapolate_below = false;
     std::optional<double> extrapolate_to_m;
+    /// The drilled base of the hole: the model never reaches below it, even where a tie bracket
+    /// (a range-extended base) does.
+    std::optional<double> section_base_m;
+    /// The logged contact of the carbonate section on its volcanic basement. Ties lying wholly
+    /// below it (lava dates) become one tie at the contact: their inverse-variance weighted mean,
+    /// its sd widened by sqrt(MSWD) when MSWD > 1 (basement_age.hpp). The contact is a hiatus
+    /// surface, tie brackets reaching across it end at it, and the model ends there. Why: a
+    /// lava pile is dated as a unit; forcing its scattered dates into depth order would push
+    /// the deepest ones old and say nothing about the reef above.
+    std::optional<double> basement_contact_m;
     /// Logged surfaces where the age may jump (exposure, hardground, erosion from
     /// loggedSurfaces); the caller chooses which.
     std::vector<double> hiatus_depths_m;

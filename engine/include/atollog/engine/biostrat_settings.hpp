@@ -44,6 +44,12 @@ struct BiostratSettings {
     /// old bound of the rock at the pick, not its age.
     bool basement_bases_as_ties = false;
 
+    /// Tie points from picks whose bracket holds a logged surface (DatumPick::
+    /// truncated_at_surface; with extended ties also extension_reaches_surface). Off by default: a datum whose age falls in the missing time is
+    /// squeezed onto the surface, so its age dates neither side; as a point tie it would pull
+    /// the model across the surface as a ramp and hide the hiatus.
+    bool surface_picks_as_ties = false;
+
     /// Tie points carry the extended bracket (range-extension confidence) instead of the plain
     /// one widened for partial recovery. Needs range_extension_confidence.
     bool ties_use_extended_bracket = false;

@@ -78,6 +78,9 @@ struct DatumPick {
     /// than the event by up to the missing time.
     bool truncated_at_surface = false;
     std::vector<LoggedSurface> surfaces_at_pick;
+    /// A logged surface other than the basement contact lies in the range-extended bracket
+    /// (not in the widened one): the datum may be squeezed onto it as well.
+    bool extension_reaches_surface = false;
     /// A base (first occurrence) in a hole with a logged basement contact whose true datum may
     /// lie at or below the floor of the carbonate section: no carbonate below records an older
     /// first occurrence, so the taxon may have lived before the reef began. Either
