@@ -17,7 +17,14 @@ double massAccumulationRate_g_cm2_kyr(double lsr_cm_per_kyr, double dry_density_
         throw std::invalid_argument("mass accumulation rate: dry_density_g_cm3 must be > 0, got " +
                                     std::to_string(dry_density_g_cm3));
     // cm/kyr x g/cm3 = g/cm2/kyr.
-    return lsr_cm_per_kyr * dry_density_g_cm3;
+    const double mar = lsr_cm_per_kyr * dry_density_g_cm3;
+    // Two finite factors whose product overflows (1e300 x 1e300): refused rather than inf.
+    if (!std::isfinite(mar))
+        throw std::invalid_argument("mass accumulation rate: lsr_cm_per_kyr " +
+                                    std::to_string(lsr_cm_per_kyr) + " x dry_density_g_cm3 " +
+                                    std::to_string(dry_density_g_cm3) +
+                                    " overflows; check both values and their units");
+    return mar;
 }
 
 double carbonateAccumulationRate_g_cm2_kyr(double mar_g_cm2_kyr, double caco3_pct) {

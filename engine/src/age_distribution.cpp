@@ -69,23 +69,33 @@ AgeDistribution AgeDistribution::gridded(std::vector<double> ages_ma, std::vecto
         total += mass[i];
     }
     if (!(total > 0) || !std::isfinite(total))
-        throw std::invalid_argument("AgeDistribution::gridded: the density has no mass");
+        throw std::invalid_argument("AgeDistribution::gridded: the density has no mass (all "
+                                    "densities 0, or ages so far apart that the bin widths "
+                                    "overflow: give ages within a finite span)");
 
     AgeDistribution d;
     d.grid_cdf_.assign(n + 1, 0.0);
-    double cumulative = 0, first_moment = 0, second_moment = 0;
+    double cumulative = 0, first_moment = 0;
     for (std::size_t i = 0; i < n; ++i) {
         const double p = mass[i] / total;
         cumulative += p;
         d.grid_cdf_[i + 1] = std::min(cumulative, 1.0);
-        const double lo = edges[i], hi = edges[i + 1];
-        first_moment += p * 0.5 * (lo + hi);                      // uniform on [lo, hi]
-        second_moment += p * (lo * lo + lo * hi + hi * hi) / 3.0; // E[x^2] of that uniform
+        first_moment += p * (0.5 * edges[i] + 0.5 * edges[i + 1]); // uniform on the bin
     }
     d.grid_cdf_[n] = 1.0; // exact, whatever the rounding of the running sum
     d.mean_ma_ = first_moment;
-    // Guard against a tiny negative variance from cancellation on a very narrow distribution.
-    d.sd_ma_ = std::sqrt(std::max(0.0, second_moment - first_moment * first_moment));
+    // Variance about the mean, in units of the whole span: E[x^2] - E[x]^2 overflowed for ages
+    // near 1e300 (inf - inf, read as sd 0) and cancelled to 0 for narrow grids far from 0 (a
+    // tie's tail score then divided by 0). Each bin adds (centre - mean)^2 + width^2 / 12.
+    const double span = edges[n] - edges[0];
+    double variance_in_spans = 0;
+    for (std::size_t i = 0; i < n; ++i) {
+        const double p = mass[i] / total;
+        const double centre = ((0.5 * edges[i] + 0.5 * edges[i + 1]) - first_moment) / span;
+        const double width = (edges[i + 1] - edges[i]) / span;
+        variance_in_spans += p * (centre * centre + width * width / 12.0);
+    }
+    d.sd_ma_ = span * std::sqrt(variance_in_spans);
     d.grid_ages_ma_ = std::move(edges);
     return d;
 }

@@ -179,7 +179,9 @@ PreparedModel prepareAgeModel(const std::string& hole, const std::vector<AgeTie>
     const double first_k = std::ceil(m.top_m / step - 1e-9);
     const double last_k = std::floor(m.base_m / step + 1e-9);
     if (last_k - first_k > 50'000'000)
-        fail("grid_step_m " + num(step) + " gives more than 50,000,000 grid depths");
+        fail("grid_step_m " + num(step) + " over the model's depths [" + num(m.top_m) + ", " +
+             num(m.base_m) + "] m gives more than 50,000,000 grid depths: check the tie "
+             "depths and the grid step");
     m.nodes.push_back({m.top_m, false});
     for (double k = first_k; k <= last_k; ++k) {
         const double d = k * step;

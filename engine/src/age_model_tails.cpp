@@ -4,6 +4,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <numbers>
 
 namespace atollog::detail {
@@ -29,6 +30,13 @@ TieTail tieTail(const PreparedTie& tie, double depth_q500_m, double age_q500_ma)
         if (f > 0 && f < 1)
             z = standardNormalQuantile(f);
     }
+    // A gridded age with no spread in double precision (sd 0) and a median outside its
+    // support gave z = +/-inf (or NaN at its mean). Only those are replaced: the largest finite
+    // score keeps them ranked first; finite scores are left as they are.
+    if (std::isnan(z))
+        z = 0;
+    else if (std::isinf(z))
+        z = std::copysign(std::numeric_limits<double>::max(), z);
     t.z_score = z;
     t.tail_probability = std::erfc(std::fabs(z) / std::numbers::sqrt2);
     t.likely_outlier = std::fabs(z) >= kOutlierZ;

@@ -2,7 +2,9 @@
 
 #include "atollog/engine/number_text.hpp"
 
+#include <algorithm>
 #include <cmath>
+#include <limits>
 #include <stdexcept>
 
 namespace atollog {
@@ -13,6 +15,11 @@ PooledAge pooledAge(const std::vector<double>& ages_ma, const std::vector<double
     if (ages_ma.size() != sds_ma.size())
         throw std::invalid_argument("pooledAge: " + std::to_string(ages_ma.size()) +
                                     " ages but " + std::to_string(sds_ma.size()) + " sds");
+    // Weights relative to the smallest sd, w_i = (sd_min / sd_i)^2 in (0, 1]: plain 1/sd^2
+    // overflowed for sds of 1e-300 and underflowed to 0 for 1e300 (mean 0/0 = NaN).
+    double sd_min = std::numeric_limits<double>::infinity();
+    for (double s : sds_ma)
+        if (s > 0) sd_min = std::min(sd_min, s);
     double sw = 0, swx = 0;
     for (std::size_t i = 0; i < ages_ma.size(); ++i) {
         if (!std::isfinite(ages_ma[i]))
@@ -21,14 +28,15 @@ PooledAge pooledAge(const std::vector<double>& ages_ma, const std::vector<double
         if (!std::isfinite(sds_ma[i]) || !(sds_ma[i] > 0))
             throw std::invalid_argument("pooledAge: sd " + std::to_string(i + 1) + " is " +
                                         numberText(sds_ma[i]) + "; give a finite sd > 0");
-        const double w = 1.0 / (sds_ma[i] * sds_ma[i]);
+        const double ratio = sd_min / sds_ma[i];
+        const double w = ratio * ratio;
         sw += w;
         swx += w * ages_ma[i];
     }
     PooledAge p;
     p.count = static_cast<int>(ages_ma.size());
     p.mean_ma = swx / sw;
-    p.sd_plain_ma = 1.0 / std::sqrt(sw);
+    p.sd_plain_ma = sd_min / std::sqrt(sw);
     if (p.count > 1) {
         double chi2 = 0;
         for (std::size_t i = 0; i < ages_ma.size(); ++i) {
@@ -38,6 +46,11 @@ PooledAge pooledAge(const std::vector<double>& ages_ma, const std::vector<double
         p.mswd = chi2 / (p.count - 1);
     }
     p.sd_ma = p.mswd > 1 ? p.sd_plain_ma * std::sqrt(p.mswd) : p.sd_plain_ma;
+    // Dates scattered by ~1e154 sds (or summing past 1e308) overflow the mean or the MSWD.
+    if (!std::isfinite(p.mean_ma) || !std::isfinite(p.mswd) || !std::isfinite(p.sd_ma))
+        throw std::invalid_argument("pooledAge: the mean or MSWD of " + std::to_string(p.count) +
+                                    " dates overflows a double; the ages lie too many sds "
+                                    "apart: check the ages and sds");
     return p;
 }
 

@@ -89,6 +89,13 @@ ChainMigration chainMigration(std::span<const ChainPoint> points) {
         m.rate_km_per_myr = 1.0 / m.york.slope;
         // First-order propagation of the slope's sd through v = 1/b.
         m.rate_sd_km_per_myr = m.york.slope_sd / (m.york.slope * m.york.slope);
+        // A slope near 0 (e.g. 1e-300 Myr/km) gives an infinite rate or sd: refused by name.
+        if (!std::isfinite(*m.rate_km_per_myr) || !std::isfinite(*m.rate_sd_km_per_myr))
+            throw std::invalid_argument("chain migration: the York slope " +
+                                        std::to_string(m.york.slope) + " +/- " +
+                                        std::to_string(m.york.slope_sd) +
+                                        " Myr/km is too close to 0 for a rate 1/slope; the ages "
+                                        "barely change along the chain");
     }
     if (m.ols.slope > 0)
         m.ols_rate_km_per_myr = 1.0 / m.ols.slope;

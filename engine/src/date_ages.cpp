@@ -35,7 +35,12 @@ void checkSettings(const DateSettings& s) {
                                     std::to_string(s.mc_draws));
 }
 
-void setAge(DateAge& out, const AgeDistribution& age) {
+void setAge(DateAge& out, const AgeDistribution& age, std::size_t row) {
+    // Ma -> ka multiplies by 1000: an age above ~1.8e305 Ma would become inf ka.
+    if (!std::isfinite(age.mean_ma() * kKaPerMa) || !std::isfinite(age.sd_ma() * kKaPerMa))
+        throw std::invalid_argument(rowText(row) + ": age_ma " + numberText(age.mean_ma()) +
+                                    " +/- " + numberText(age.sd_ma()) +
+                                    " is beyond any age in ka; check the value and its unit");
     out.age = age;
     out.age_ka = age.mean_ma() * kKaPerMa;
     out.age_sd_ka = age.sd_ma() * kKaPerMa;
@@ -46,11 +51,14 @@ void takeEnteredAge(DateAge& out, const NumericalDate& d, std::size_t row) {
         throw std::invalid_argument(rowText(row) + ": method " +
                                     std::string(toString(d.method)) +
                                     " needs age and age_sd (or its raw measurement)");
-    try {
-        setAge(out, AgeDistribution::normal(*d.age_ma, *d.age_sd_ma));
-    } catch (const std::invalid_argument& e) {
-        throw std::invalid_argument(rowText(row) + ": " + e.what());
-    }
+    // Checked here so that the message names the dates columns, not the distribution's.
+    if (!std::isfinite(*d.age_ma))
+        throw std::invalid_argument(rowText(row) + ": age_ma " + numberText(*d.age_ma) +
+                                    " is not a finite number; give the age in Ma");
+    if (!std::isfinite(*d.age_sd_ma) || !(*d.age_sd_ma > 0))
+        throw std::invalid_argument(rowText(row) + ": age_sd_ma " + numberText(*d.age_sd_ma) +
+                                    " must be a finite number > 0; give the age's 1 sd in Ma");
+    setAge(out, AgeDistribution::normal(*d.age_ma, *d.age_sd_ma), row);
     out.flags.push_back(date_flag::kAsEntered);
     out.usable_for_model = true;
 }
@@ -93,10 +101,18 @@ void dateUTh(DateAge& out, const UThMeasurement& m, const DateSettings& s, std::
     out.d234u_initial_sd_permil = u.spread->sd_d234u_initial_permil;
     out.uth_q025_ka = u.spread->q025_age_yr / 1e3;
     out.uth_q975_ka = u.spread->q975_age_yr / 1e3;
+    // Sds so small (e.g. 1e-300) that every draw gives the same age leave no spread: a normal
+    // needs sd > 0, and its own message would name neither the row nor the inputs.
+    if (!(u.spread->sd_age_yr > 0))
+        throw std::invalid_argument(rowText(row) + ": the U-Th Monte Carlo gives no spread of "
+                                    "ages (230Th/238U sd " + numberText(m.th230_u238_act_sd) +
+                                    ", 234U/238U sd " + numberText(m.u234_u238_act_sd) +
+                                    "); give the measured sds");
     // The model sees a normal with the Monte Carlo mean and sd: close to the draws' shape
     // except near the equation's limit (see uth_q025_ka / uth_q975_ka for the skew).
     setAge(out, AgeDistribution::normal(u.spread->mean_age_yr / kYrPerMa,
-                                        u.spread->sd_age_yr / kYrPerMa));
+                                        u.spread->sd_age_yr / kYrPerMa),
+           row);
     const bool passes =
         std::abs(*u.d234u_initial_permil - kSeawaterD234uPermil) <= s.d234u_tolerance_permil;
     if (!passes) {
@@ -137,7 +153,7 @@ void dateC14(DateAge& out, const C14Measurement& m, const std::vector<Calibratio
             throw std::invalid_argument(rowText(row) + ": " + e.what());
         }
     }();
-    setAge(out, cal.age);
+    setAge(out, cal.age, row);
     out.hpd_68 = std::move(cal.hpd_68);
     out.hpd_95 = std::move(cal.hpd_95);
     if (cal.at_curve_edge) {
@@ -187,6 +203,12 @@ std::vector<DateAge> computeDateAges(const CoreDataset& data, const DateSettings
                                             "', not '" + d.hole + "'");
             top_m = it->second->top_m;
             base_m = std::max(it->second->base_m, top_m);
+            // Named here: DepthModel's own message would name neither the row nor the sample.
+            if (!std::isfinite(top_m) || !std::isfinite(base_m))
+                throw std::invalid_argument(rowText(i) + ": sample '" + *d.sample +
+                                            "' has a non-finite top_m or base_m (" +
+                                            numberText(it->second->top_m) + ", " +
+                                            numberText(it->second->base_m) + ")");
         } else if (d.depth_m) {
             if (!std::isfinite(*d.depth_m))
                 throw std::invalid_argument(rowText(i) + ": depth_m is not finite");

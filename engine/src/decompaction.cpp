@@ -94,9 +94,13 @@ DecompactedLayer decompactLayer(double top_m, double base_m, double new_top_m,
         return {new_top_m, lo}; // phi0 = 0: no pores, nothing to restore
     if (f_hi <= 0)
         return {new_top_m, hi};
+    // Solved in units of the solid thickness (same root): TOMS 748 multiplies function values
+    // together, and for a layer near 1e300 m those products overflowed into a NaN base.
+    auto f_scaled = [&](double new_base_m) { return f(new_base_m) / solid_m; };
     std::uintmax_t max_iter = 200;
     const auto root = boost::math::tools::toms748_solve(
-        f, lo, hi, f_lo, f_hi, boost::math::tools::eps_tolerance<double>(50), max_iter);
+        f_scaled, lo, hi, f_lo / solid_m, f_hi / solid_m,
+        boost::math::tools::eps_tolerance<double>(50), max_iter);
     return {new_top_m, 0.5 * (root.first + root.second)};
 }
 

@@ -15,7 +15,10 @@ std::vector<AgeInterval> highestDensityIntervals(const AgeDistribution& age, dou
                                     std::to_string(level));
     if (age.isNormal()) {
         // Symmetric and unimodal: the central interval is the highest-density one.
-        const double z = boost::math::quantile(boost::math::normal(0.0, 1.0), 0.5 + 0.5 * level);
+        // From the upper tail: 0.5 + 0.5 level rounds to 1 for a level within 1e-16 of 1, and
+        // the quantile at 1 overflows (Boost throws std::overflow_error).
+        const double z = boost::math::quantile(
+            boost::math::complement(boost::math::normal(0.0, 1.0), 0.5 - 0.5 * level));
         return {{age.mean_ma() - z * age.sd_ma(), age.mean_ma() + z * age.sd_ma(), level}};
     }
     const auto& edges = age.grid_ages_ma();

@@ -1,5 +1,6 @@
 #include "atollog/engine/least_squares_line.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <cstddef>
 #include <stdexcept>
@@ -25,28 +26,47 @@ LeastSquaresLine leastSquaresLine(std::span<const double> x, std::span<const dou
     }
     const double dn = static_cast<double>(n);
     const double mx = sx / dn, my = sy / dn;
-    double sxx = 0, syy = 0, sxy = 0;
-    for (std::size_t i = 0; i < n; ++i) {
-        sxx += (x[i] - mx) * (x[i] - mx);
-        syy += (y[i] - my) * (y[i] - my);
-        sxy += (x[i] - mx) * (y[i] - my);
-    }
-    if (sxx == 0)
+    // Deviations are divided by a power of two near their largest size (exact: the sums are
+    // those of the plain deviations, scaled): squares of deviations near 1e300 overflowed into a
+    // NaN slope, and near 1e-300 underflowed to 0 ("all x equal" when they were not).
+    auto scaleOf = [&](std::span<const double> v, double mean) {
+        double largest = 0;
+        for (double e : v) largest = std::max(largest, std::fabs(e - mean));
+        return largest > 0 && std::isfinite(largest) ? std::ldexp(1.0, std::ilogb(largest))
+                                                     : largest;
+    };
+    const double kx = scaleOf(x, mx), ky_raw = scaleOf(y, my);
+    if (kx == 0)
         throw std::invalid_argument("straight line: all x values are equal (" +
                                     std::to_string(x[0]) + "); the slope is undefined");
+    const double ky = ky_raw == 0 ? 1.0 : ky_raw;
+    double suu = 0, svv = 0, suv = 0;
+    for (std::size_t i = 0; i < n; ++i) {
+        const double u = (x[i] - mx) / kx, v = (y[i] - my) / ky;
+        suu += u * u;
+        svv += v * v;
+        suv += u * v;
+    }
     LeastSquaresLine fit;
     fit.n = static_cast<int>(n);
-    fit.slope = sxy / sxx;
+    const double b_scaled = suv / suu;
+    fit.slope = b_scaled * (ky / kx);
     fit.intercept = my - fit.slope * mx;
-    double ssr = 0;
+    double ssr_scaled = 0;
     for (std::size_t i = 0; i < n; ++i) {
-        const double res = y[i] - fit.intercept - fit.slope * x[i];
-        ssr += res * res;
+        const double res = (y[i] - my) / ky - b_scaled * (x[i] - mx) / kx;
+        ssr_scaled += res * res;
     }
-    const double s2 = ssr / (dn - 2.0);
-    fit.slope_sd = std::sqrt(s2 / sxx);
-    fit.intercept_sd = std::sqrt(s2 * (1.0 / dn + mx * mx / sxx));
-    fit.r = syy == 0 ? 0.0 : sxy / std::sqrt(sxx * syy);
+    const double s2_scaled = ssr_scaled / (dn - 2.0);
+    fit.slope_sd = std::sqrt(s2_scaled / suu) * (ky / kx);
+    fit.intercept_sd = ky * std::sqrt(s2_scaled * (1.0 / dn + (mx / kx) * (mx / kx) / suu));
+    fit.r = svv == 0 ? 0.0 : suv / std::sqrt(suu * svv);
+    // Finite x and y can still give a slope beyond a double (x in 1e-300, y in 1e300).
+    for (const double v : {fit.slope, fit.intercept, fit.slope_sd, fit.intercept_sd, fit.r})
+        if (!std::isfinite(v))
+            throw std::invalid_argument("straight line: the slope or intercept (or their sds) "
+                                        "overflows a double; x and y differ by too many orders "
+                                        "of magnitude: rescale them");
     return fit;
 }
 

@@ -23,7 +23,13 @@ RadiocarbonAge conventionalAge(double f14c, double f14c_sd) {
     if (!std::isfinite(f14c_sd) || !(f14c_sd > 0))
         throw std::invalid_argument("radiocarbon: f14c_sd must be finite and > 0, got " +
                                     std::to_string(f14c_sd));
-    return {-kLibbyMeanLifeYr * std::log(f14c), kLibbyMeanLifeYr * f14c_sd / f14c};
+    const RadiocarbonAge a{-kLibbyMeanLifeYr * std::log(f14c), kLibbyMeanLifeYr * f14c_sd / f14c};
+    // sd / f14c overflows for e.g. 1e300 / 1e-300: refused rather than returned as inf.
+    if (!std::isfinite(a.cra_sd_yr))
+        throw std::invalid_argument("radiocarbon: f14c_sd " + std::to_string(f14c_sd) +
+                                    " over f14c " + std::to_string(f14c) +
+                                    " overflows the CRA sd; check both values");
+    return a;
 }
 
 RadiocarbonAge applyDeltaR(const RadiocarbonAge& cra, double delta_r_yr, double delta_r_sd_yr) {
@@ -33,7 +39,13 @@ RadiocarbonAge applyDeltaR(const RadiocarbonAge& cra, double delta_r_yr, double 
         throw std::invalid_argument("radiocarbon: delta_r_yr is not finite");
     if (!std::isfinite(delta_r_sd_yr) || delta_r_sd_yr < 0)
         throw std::invalid_argument("radiocarbon: delta_r_sd_yr must be finite and >= 0");
-    return {cra.cra_yr - delta_r_yr, std::hypot(cra.cra_sd_yr, delta_r_sd_yr)};
+    const RadiocarbonAge a{cra.cra_yr - delta_r_yr, std::hypot(cra.cra_sd_yr, delta_r_sd_yr)};
+    // Two finite values whose difference (or quadrature sum) overflows: refused, not inf.
+    if (!std::isfinite(a.cra_yr) || !std::isfinite(a.cra_sd_yr))
+        throw std::invalid_argument("radiocarbon: the CRA less delta_r_yr " +
+                                    std::to_string(delta_r_yr) +
+                                    " (or its sd with delta_r_sd_yr) overflows; check both");
+    return a;
 }
 
 RadiocarbonAge radiocarbonAgeOf(const C14Measurement& m) {
@@ -67,8 +79,16 @@ CalibratedAge calibrate(const RadiocarbonAge& cra, const std::vector<Calibration
 
     const double young = c.front().cal_bp, old = c.back().cal_bp;
     const double span = old - young;
+    // Two finite cal_bp whose difference overflows gave n = floor(inf / inf) (undefined).
+    if (!std::isfinite(span))
+        throw std::invalid_argument("calibrate: the curve's cal_bp span from " +
+                                    std::to_string(young) + " to " + std::to_string(old) +
+                                    " overflows; check the curve's cal_bp values");
     const double step = std::max(1.0, span / kMaxCalibrationGridPoints);
-    const std::size_t n = static_cast<std::size_t>(std::floor(span / step)) + 1;
+    // At least both ends: a curve shorter than one step gave a single point, which no
+    // distribution can be made of.
+    const std::size_t n = std::max<std::size_t>(
+        2, static_cast<std::size_t>(std::floor(span / step)) + 1);
 
     std::vector<double> t(n), log_p(n);
     std::size_t seg = 0;
@@ -81,14 +101,22 @@ CalibratedAge calibrate(const RadiocarbonAge& cra, const std::vector<Calibration
         const double w = (t[i] - a.cal_bp) / (b.cal_bp - a.cal_bp);
         const double mu = a.c14_bp + w * (b.c14_bp - a.c14_bp);
         const double sigma = a.sd + w * (b.sd - a.sd);
-        const double var = cra.cra_sd_yr * cra.cra_sd_yr + sigma * sigma;
-        if (!(var > 0))
+        // hypot and r / s rather than s^2 + sigma^2 and r^2 / var: a CRA sd of 1e300 made the
+        // variance inf and every log density -inf, hence NaN densities.
+        const double s = std::hypot(cra.cra_sd_yr, sigma);
+        if (!(s > 0))
             throw std::invalid_argument("calibrate: the CRA sd and the curve sd are both 0 at " +
                                         std::to_string(t[i]) + " cal BP");
-        const double r = cra.cra_yr - mu;
-        log_p[i] = -0.5 * r * r / var - 0.5 * std::log(var);
+        const double z = (cra.cra_yr - mu) / s;
+        log_p[i] = -0.5 * z * z - std::log(s);
         peak = std::max(peak, log_p[i]);
     }
+    // Every point more than ~1e154 sd from the CRA: the densities cannot be compared.
+    if (!std::isfinite(peak))
+        throw std::invalid_argument("calibrate: the CRA (cra_yr " + std::to_string(cra.cra_yr) +
+                                    " +/- " + std::to_string(cra.cra_sd_yr) +
+                                    ") lies too many sds from every curve point; check cra_yr "
+                                    "and its sd");
     std::vector<double> density(n), ages_ma(n);
     for (std::size_t i = 0; i < n; ++i) {
         density[i] = std::exp(log_p[i] - peak); // peak is 1: no underflow of the whole

@@ -42,8 +42,8 @@ SeaLevelAt SeaLevelCurve::at(double age_ma) const {
         return {hi->level_m, sd(*hi), false};
     const auto lo = hi - 1;
     const double f = (age_ma - lo->age_ma) / (hi->age_ma - lo->age_ma);
-    return {lo->level_m + f * (hi->level_m - lo->level_m), sd(*lo) + f * (sd(*hi) - sd(*lo)),
-            false};
+    // (1 - f) a + f b rather than a + f (b - a): b - a overflows for levels of -1e308 and 1e308.
+    return {(1.0 - f) * lo->level_m + f * hi->level_m, (1.0 - f) * sd(*lo) + f * sd(*hi), false};
 }
 
 } // namespace atollog

@@ -7,6 +7,7 @@
 #include <random>
 #include <stdexcept>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace atollog {
@@ -15,6 +16,22 @@ namespace {
 void requireFinite(const char* what, double v) {
     if (!std::isfinite(v))
         throw std::invalid_argument(std::string("subsidence: ") + what + " is not finite");
+}
+
+// Bounds that keep every square in the draw summaries finite (finite values of 1e300 gave
+// infinite sds). No depth, elevation or water depth exceeds the Earth's radius (6371 km, from
+// memory [M]); no age exceeds 1e6 Ma (as buildAgeModel); a rate over less than a year
+// (1e-6 Ma) is no long-term rate, and S / t over t near 0 overflowed.
+constexpr double kMaxAbsLengthM = 1e7;
+constexpr double kMaxAgeMa = 1e6;
+constexpr double kMinAgeForRateFloorMa = 1e-6;
+
+void requireLength(const char* what, double v) {
+    requireFinite(what, v);
+    if (std::fabs(v) > kMaxAbsLengthM)
+        throw std::invalid_argument(std::string("subsidence: ") + what + " " +
+                                    std::to_string(v) +
+                                    " m is beyond the Earth's radius; give metres");
 }
 
 DrawSummary summarize(std::vector<double> values) {
@@ -47,11 +64,15 @@ SubsidenceEstimate subsidenceDraws(double depth_m, double collar_elev_m, double 
                                    double paleodepth_max_m, std::span<const double> age_draws_ma,
                                    const SeaLevelCurve& sea_level, std::uint64_t seed,
                                    const SubsidenceSettings& settings) {
-    requireFinite("depth_m", depth_m);
-    requireFinite("collar_elev_m", collar_elev_m);
-    requireFinite("paleodepth_min_m", paleodepth_min_m);
-    requireFinite("paleodepth_max_m", paleodepth_max_m);
+    requireLength("depth_m", depth_m);
+    requireLength("collar_elev_m", collar_elev_m);
+    requireLength("paleodepth_min_m", paleodepth_min_m);
+    requireLength("paleodepth_max_m", paleodepth_max_m);
     requireFinite("min_age_for_rate_ma", settings.min_age_for_rate_ma);
+    if (settings.min_age_for_rate_ma < kMinAgeForRateFloorMa)
+        throw std::invalid_argument("subsidence: min_age_for_rate_ma " +
+                                    std::to_string(settings.min_age_for_rate_ma) +
+                                    " must be >= 1e-6 Ma (one year): S / t over less is no rate");
     if (paleodepth_min_m > paleodepth_max_m)
         throw std::invalid_argument("subsidence: paleodepth_min_m (" +
                                     std::to_string(paleodepth_min_m) +
@@ -61,6 +82,9 @@ SubsidenceEstimate subsidenceDraws(double depth_m, double collar_elev_m, double 
         throw std::invalid_argument("subsidence: no age draws");
     for (double t : age_draws_ma) {
         requireFinite("an age draw", t);
+        if (t > kMaxAgeMa)
+            throw std::invalid_argument("subsidence: age draw " + std::to_string(t) +
+                                        " Ma is beyond 1e6 Ma; give ages in Ma");
         if (t < -0.0001)
             throw std::invalid_argument("subsidence: age draw " + std::to_string(t) +
                                         " Ma lies more than a century after 1950");
@@ -109,6 +133,17 @@ SubsidencePoint subsidencePoint(std::string sample, const SubsidenceEstimate& e)
 HoleSubsidenceRate holeSubsidenceRate(std::span<const SubsidencePoint> points) {
     std::vector<double> t, t_sd, s, s_sd, r;
     for (const SubsidencePoint& p : points) {
+        // Checked here so that the message names the sample; the York fit would name only a
+        // point number (and clamp would pass a NaN correlation on).
+        for (const auto& [name, v] : {std::pair{"age_ma", p.age_ma},
+                                      std::pair{"age_sd_ma", p.age_sd_ma},
+                                      std::pair{"subsidence_m", p.subsidence_m},
+                                      std::pair{"subsidence_sd_m", p.subsidence_sd_m},
+                                      std::pair{"correlation", p.correlation}})
+            if (!std::isfinite(v))
+                throw std::invalid_argument("hole subsidence rate: sample '" + p.sample + "' has " +
+                                            name + " " + std::to_string(v) +
+                                            "; give a finite number");
         if (!(p.age_sd_ma > 0) || !(p.subsidence_sd_m > 0))
             throw std::invalid_argument("hole subsidence rate: sample '" + p.sample +
                                         "' needs age_sd_ma > 0 and subsidence_sd_m > 0 (got " +

@@ -25,7 +25,16 @@ constexpr double kU238MolarMass = 238.0507882;
 
 void requireFinite(double v, const char *what) {
     if (!std::isfinite(v))
-        throw std::invalid_argument(std::string("U-Th: ") + what + " is not finite");
+        throw std::invalid_argument(std::string("U-Th: ") + what + " is not finite (got " +
+                                    std::to_string(v) + "); give a finite number");
+}
+
+/// A result computed from finite inputs that overflowed: refused naming the inputs, never
+/// returned as inf.
+double requireFiniteResult(double v, const std::string& what) {
+    if (!std::isfinite(v))
+        throw std::invalid_argument("U-Th: " + what + " overflows a double; check the values");
+    return v;
 }
 
 /// measured-minus-model ratio at age T; negative while T is too young.
@@ -52,7 +61,8 @@ UThHalfLives uthHalfLives(UThHalfLifeSet set) {
 
 double d234uPermilFromActivity(double u234_u238_act) {
     requireFinite(u234_u238_act, "234U/238U");
-    return (u234_u238_act - 1.0) * 1000.0;
+    return requireFiniteResult((u234_u238_act - 1.0) * 1000.0,
+                               "d234U from 234U/238U " + std::to_string(u234_u238_act));
 }
 
 UThRatios uthRatiosForAge(double age_yr, double d234u_initial_permil, UThHalfLifeSet set) {
@@ -70,7 +80,10 @@ UThRatios uthRatiosForAge(double age_yr, double d234u_initial_permil, UThHalfLif
 double d234uInitialPermil(double d234u_measured_permil, double age_yr, UThHalfLifeSet set) {
     requireFinite(d234u_measured_permil, "measured d234U");
     requireFinite(age_yr, "age_yr");
-    return d234u_measured_permil * std::exp(uthHalfLives(set).lambda234_per_yr() * age_yr);
+    // e^(l234 T) overflows for T beyond ~2e8 yr: refused rather than returned as inf.
+    return requireFiniteResult(
+        d234u_measured_permil * std::exp(uthHalfLives(set).lambda234_per_yr() * age_yr),
+        "initial d234U at age_yr " + std::to_string(age_yr));
 }
 
 std::optional<double> solveUThAgeYr(double th230_u238_act, double d234u_measured_permil,
@@ -124,7 +137,10 @@ double detritalTh230U238Act(double th232_ppb, double u238_ppb, double th230_th23
         throw std::invalid_argument("U-Th: initial 230Th/232Th atomic ratio must be >= 0");
     const double atoms_232_per_238 = (th232_ppb / kTh232MolarMass) / (u238_ppb / kU238MolarMass);
     const double lambda230_over_238 = kU238HalfLifeYr / uthHalfLives(set).th230_yr;
-    return atoms_232_per_238 * th230_th232_atomic * lambda230_over_238;
+    // th232_ppb / u238_ppb overflows for e.g. 1e300 / 1e-300: refused rather than inf.
+    return requireFiniteResult(atoms_232_per_238 * th230_th232_atomic * lambda230_over_238,
+                               "detrital 230Th/238U from th232_ppb " + std::to_string(th232_ppb) +
+                                   " and u238_ppb " + std::to_string(u238_ppb));
 }
 
 UThAge computeUThAge(const UThMeasurement& m, const UThSettings& settings, std::uint64_t seed) {
@@ -146,6 +162,11 @@ UThAge computeUThAge(const UThMeasurement& m, const UThSettings& settings, std::
     const UThHalfLifeSet set = settings.half_lives;
     UThAge out;
     out.d234u_measured_permil = d234uPermilFromActivity(m.u234_u238_act);
+    // A 234U/238U so close to 0 (e.g. 1e-300) that d234U rounds to -1000 has no age equation;
+    // refused here by name rather than by solveUThAgeYr's message about d234U.
+    if (!(out.d234u_measured_permil > -1000.0))
+        throw std::invalid_argument("U-Th: 234U/238U " + std::to_string(m.u234_u238_act) +
+                                    " is too close to 0 (d234U rounds to -1000 per mil)");
     double detrital = 0.0;
     if (settings.detrital_correction && m.th232_ppb && m.u238_ppb) {
         detrital = detritalTh230U238Act(*m.th232_ppb, *m.u238_ppb,
@@ -167,6 +188,9 @@ UThAge computeUThAge(const UThMeasurement& m, const UThSettings& settings, std::
         const double scale = draws.normal(1.0, settings.detrital_ratio_relative_sd);
         if (!(u234 > 0)) { ++out.draws_without_solution; continue; }
         const double d234u = d234uPermilFromActivity(u234);
+        // A draw of 234U/238U just above 0 rounds d234U to -1000: no age, like u234 <= 0
+        // (before, solveUThAgeYr threw from inside the Monte Carlo).
+        if (!(d234u > -1000.0)) { ++out.draws_without_solution; continue; }
         const std::optional<double> t =
             solveUThAgeYr(ratio, d234u, set, detrital * std::max(0.0, scale));
         if (!t) { ++out.draws_without_solution; continue; }
@@ -179,9 +203,14 @@ UThAge computeUThAge(const UThMeasurement& m, const UThSettings& settings, std::
             double mean = 0;
             for (double x : v) mean += x;
             mean /= static_cast<double>(v.size());
+            // Deviations in units of the largest one: draws of d234U near 1e303 (a 234U/238U
+            // sd of 1e300) overflowed the sum of squares into an infinite sd.
+            double scale = 0;
+            for (double x : v) scale = std::max(scale, std::fabs(x - mean));
+            if (!(scale > 0)) return std::pair{mean, 0.0};
             double ss = 0;
-            for (double x : v) ss += (x - mean) * (x - mean);
-            return std::pair{mean, std::sqrt(ss / static_cast<double>(v.size() - 1))};
+            for (double x : v) ss += ((x - mean) / scale) * ((x - mean) / scale);
+            return std::pair{mean, scale * std::sqrt(ss / static_cast<double>(v.size() - 1))};
         };
         UThSpread s;
         std::tie(s.mean_age_yr, s.sd_age_yr) = meanSd(ages);

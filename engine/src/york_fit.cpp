@@ -20,11 +20,88 @@ void requirePositiveSds(std::span<const double> sd, const char* which) {
                                         std::to_string(sd[i]));
 }
 
+void requireFiniteValues(std::span<const double> v, const char* which) {
+    for (std::size_t i = 0; i < v.size(); ++i)
+        if (!std::isfinite(v[i]))
+            throw std::invalid_argument(std::string("York fit: ") + which + " of point " +
+                                        std::to_string(i + 1) + " is " + std::to_string(v[i]) +
+                                        "; give a finite number");
+}
+
+/// A power of two near the largest value: dividing by it is exact.
+double powerOfTwoNear(std::span<const double> v) {
+    double largest = 0;
+    for (double e : v) largest = std::max(largest, std::fabs(e));
+    return std::ldexp(1.0, std::ilogb(largest));
+}
+
+YorkFit yorkFitUnscaled(std::span<const double> x, std::span<const double> x_sd,
+                        std::span<const double> y, std::span<const double> y_sd,
+                        std::span<const double> r);
+
 } // namespace
 
 YorkFit yorkFit(std::span<const double> x, std::span<const double> x_sd,
                 std::span<const double> y, std::span<const double> y_sd,
                 std::span<const double> r) {
+    const std::size_t n = x.size();
+    if (x_sd.size() != n || y.size() != n || y_sd.size() != n || (!r.empty() && r.size() != n))
+        throw std::invalid_argument("York fit: x, x_sd, y, y_sd (and r when given) must have the "
+                                    "same length");
+    if (n < 3)
+        throw std::invalid_argument("York fit: needs at least 3 points, got " + std::to_string(n));
+    requireFiniteValues(x, "x");
+    requireFiniteValues(y, "y");
+    requirePositiveSds(x_sd, "x_sd");
+    requirePositiveSds(y_sd, "y_sd");
+    // The fit is solved in units of the largest sd of x and of y (powers of two, so exact):
+    // weights 1/sd^2 of sds near 1e100 underflowed to 0 and the slope became NaN. The answer
+    // scales back exactly; only the convergence test, relative to max(1, |slope|), sees units.
+    const double kx = powerOfTwoNear(x_sd), ky = powerOfTwoNear(y_sd);
+    auto scaled = [](std::span<const double> v, double k) {
+        std::vector<double> out(v.begin(), v.end());
+        for (double& e : out) e /= k;
+        return out;
+    };
+    const std::vector<double> xs = scaled(x, kx), xs_sd = scaled(x_sd, kx), ys = scaled(y, ky),
+                              ys_sd = scaled(y_sd, ky);
+    for (std::size_t i = 0; i < n; ++i) {
+        if (!std::isfinite(xs[i]) || !std::isfinite(ys[i]))
+            throw std::invalid_argument("York fit: x or y of point " + std::to_string(i + 1) +
+                                        " is too large beside the largest x_sd or y_sd for a "
+                                        "double; check the values and their sds");
+        // After scaling, an sd whose 1/sd^2 still overflows lies too many orders of magnitude
+        // below the largest one.
+        if (!std::isfinite(1.0 / (xs_sd[i] * xs_sd[i])))
+            throw std::invalid_argument("York fit: x_sd of point " + std::to_string(i + 1) + " (" +
+                                        std::to_string(x_sd[i]) +
+                                        ") is too small beside the largest x_sd for 1/sd^2 in "
+                                        "a double; give sds of comparable size");
+        if (!std::isfinite(1.0 / (ys_sd[i] * ys_sd[i])))
+            throw std::invalid_argument("York fit: y_sd of point " + std::to_string(i + 1) + " (" +
+                                        std::to_string(y_sd[i]) +
+                                        ") is too small beside the largest y_sd for 1/sd^2 in "
+                                        "a double; give sds of comparable size");
+    }
+    YorkFit fit = yorkFitUnscaled(xs, xs_sd, ys, ys_sd, r);
+    fit.slope *= ky / kx;
+    fit.slope_sd *= ky / kx;
+    fit.intercept *= ky;
+    fit.intercept_sd *= ky;
+    for (const double v : {fit.slope, fit.slope_sd, fit.intercept, fit.intercept_sd,
+                           fit.chi_square, fit.mswd})
+        if (!std::isfinite(v))
+            throw std::invalid_argument("York fit: the line overflows a double; x, y and their "
+                                        "sds differ by too many orders of magnitude: check the "
+                                        "values and the x_sd and y_sd");
+    return fit;
+}
+
+namespace {
+
+YorkFit yorkFitUnscaled(std::span<const double> x, std::span<const double> x_sd,
+                        std::span<const double> y, std::span<const double> y_sd,
+                        std::span<const double> r) {
     const std::size_t n = x.size();
     if (x_sd.size() != n || y.size() != n || y_sd.size() != n || (!r.empty() && r.size() != n))
         throw std::invalid_argument("York fit: x, x_sd, y, y_sd (and r when given) must have the "
@@ -79,9 +156,12 @@ YorkFit yorkFit(std::span<const double> x, std::span<const double> x_sd,
         }
         const double b_new = num / den;
         fit.iterations = it;
+        // Finite, validated input whose products still overflow: a problem of the values' sizes,
+        // hence invalid_argument naming them (it was a runtime_error before).
         if (!std::isfinite(b_new))
-            throw std::runtime_error("York fit: the slope became non-finite at iteration " +
-                                     std::to_string(it));
+            throw std::invalid_argument("York fit: the slope became non-finite at iteration " +
+                                        std::to_string(it) + "; x, y, x_sd and y_sd differ by "
+                                        "too many orders of magnitude");
         const bool settled = std::abs(b_new - b) <= 1e-14 * std::max(1.0, std::abs(b_new));
         b = b_new;
         if (settled) {
@@ -107,6 +187,10 @@ YorkFit yorkFit(std::span<const double> x, std::span<const double> x_sd,
         const double res = y[i] - b * x[i] - a;
         chi2 += W[i] * res * res;
     }
+    // Sums that overflowed (values ~1e300 sds apart) would give a slope sd of 0 or NaN.
+    if (!std::isfinite(swu2) || !(swu2 > 0) || !std::isfinite(sw) || !std::isfinite(chi2))
+        throw std::invalid_argument("York fit: the weighted sums overflow a double; the x and y "
+                                    "values lie too many x_sd or y_sd apart: check the sds");
     const double var_b = 1.0 / swu2;
     fit.slope = b;
     fit.intercept = a;
@@ -117,5 +201,7 @@ YorkFit yorkFit(std::span<const double> x, std::span<const double> x_sd,
     fit.mswd = chi2 / fit.degrees_of_freedom;
     return fit;
 }
+
+} // namespace
 
 } // namespace atollog

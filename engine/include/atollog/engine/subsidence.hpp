@@ -54,7 +54,9 @@ struct SubsidenceEstimate {
 /// One sample's subsidence from draws of its age (Ma). The draws are used in order, one water
 /// depth and one sea level per age draw, from std::mt19937_64 seeded with `seed`. Throws
 /// std::invalid_argument on a non-finite input, paleodepth_min_m > paleodepth_max_m, no age
-/// draws, or an age draw below -0.0001 Ma (more than a century after 1950).
+/// draws, or an age draw below -0.0001 Ma (more than a century after 1950); also on a depth,
+/// elevation or paleodepth beyond 1e7 m, an age draw above 1e6 Ma, or min_age_for_rate_ma
+/// below 1e-6 Ma (bounds that keep every sum of squares finite).
 SubsidenceEstimate subsidenceDraws(double depth_m, double collar_elev_m, double paleodepth_min_m,
                                    double paleodepth_max_m, std::span<const double> age_draws_ma,
                                    const SeaLevelCurve& sea_level, std::uint64_t seed,

@@ -23,7 +23,8 @@ struct YorkFit {
 /// correlation of each point's x and y errors in (-1, 1), empty for uncorrelated errors. Needs at
 /// least 3 points (so that MSWD has a degree of freedom) and x not all equal. Throws
 /// std::invalid_argument on bad input; std::runtime_error if the slope does not converge within
-/// 1000 iterations (change below 1e-14 x max(1, |slope|)).
+/// 1000 iterations (change below 1e-14 x max(1, |slope|)). Values and sds so far apart in size
+/// that the sums overflow a double are refused with std::invalid_argument naming the sds.
 YorkFit yorkFit(std::span<const double> x, std::span<const double> x_sd,
                 std::span<const double> y, std::span<const double> y_sd,
                 std::span<const double> r = {});
