@@ -73,12 +73,18 @@ template <class OnDraw>
 void runChain(const PreparedModel& m, const AgeModelSettings& s, DrawStream stream,
               std::size_t chain, std::size_t count, TieDraw& state, OnDraw&& on_draw) {
     std::mt19937_64 rng(blockSeed(s.seed, stream, chain));
+    // The shares between surfaces are no part of the ties' target: a stream of their own keeps
+    // the ties' draws what they are without surfaces.
+    std::mt19937_64 split_rng(blockSeed(s.seed ^ 0x5b1175ULL, stream, chain));
     initialGibbsState(m.ties, state);
+    state.split_u.assign(m.surfaces_m.size(), 0.5);
     for (int k = 0; k < s.burn_in_sweeps; ++k)
         gibbsSweep(m.ties, rng, state);
     for (std::size_t j = 0; j < count; ++j) {
         for (int k = 0; k < s.thin; ++k)
             gibbsSweep(m.ties, rng, state);
+        for (double& u : state.split_u)
+            u = openUniform(split_rng);
         on_draw(j, state);
     }
 }

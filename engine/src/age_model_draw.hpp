@@ -15,6 +15,10 @@ struct TieDraw {
     std::vector<double> age_ma;   ///< by prepared tie index
     std::vector<int> depth_order; ///< prepared indices, shallowest drawn depth first
     double log_weight = 0;        ///< may be -infinity (a tie that cannot be placed in order)
+    /// One uniform in (0, 1) per surface, drawn afresh for every kept draw from a stream of its
+    /// own: how the time between two ties is shared out when several surfaces lie between them
+    /// (AgeProfile::build). Empty: every share at its middle (0.5).
+    std::vector<double> split_u;
 };
 
 /// Draws every tie of `ties` except `skip` (-1: none); consumes one uniform per bracket of

@@ -11,7 +11,7 @@ namespace atollog::detail {
 struct SurfaceOutcome {
     bool resolved = false;      ///< the only surface between two ties with a rate on a side
     double jump_ma = 0;         ///< >= 0; 0 when unresolved
-    double profile_jump_ma = 0; ///< the jump the line makes here (several surfaces: at the deepest)
+    double profile_jump_ma = 0; ///< the jump the line makes here (several surfaces: its share)
 };
 
 class AgeProfile {
@@ -46,7 +46,12 @@ class AgeProfile {
         double anchor_age_ma;
         double rate_ma_per_m; ///< age per metre, >= 0
     };
+    void splitBetweenSurfaces(const TieDraw& draw, const std::vector<double>& surfaces_m,
+                              std::size_t first, std::size_t last, double age_above,
+                              double age_below, double r_above, double r_below);
+
     std::vector<Piece> pieces_;
+    std::vector<double> cuts_;
     std::vector<SurfaceOutcome> outcomes_;
     std::vector<double> z_, a_;
 };
