@@ -115,7 +115,19 @@ void extend(DatumPick& p, const BiostratSettings& s, const DepthModel& model) {
         return;
     p.extension_fraction = rangeExtensionFraction(p.horizon_count, *s.range_extension_confidence);
     if (!p.extension_fraction) {
+        // One horizon: the interval is unbounded (Strauss & Sadler 1989), so the extended
+        // bracket is open on its outward side, to the collar or the deepest cored depth.
         p.extension_undefined = true;
+        if (p.kind == EventKind::Top) {
+            p.extended.shallow_m = 0.0;
+            p.extended.open_shallow = true;
+        } else {
+            double floor_m = p.extended.deep_m;
+            for (const CoreRun& r : model.runs())
+                floor_m = std::max(floor_m, r.base_m);
+            p.extended.deep_m = floor_m;
+            p.extended.open_deep = true;
+        }
         return;
     }
     const double reach_m = *p.extension_fraction * p.observed_range_m;

@@ -31,6 +31,10 @@ std::vector<TiePoint> makeTiePoints(const std::vector<DatumPick>& picks,
             (settings.ties_use_extended_bracket && p.extension_reaches_surface);
         if (bracket_holds_surface && !settings.surface_picks_as_ties)
             continue;
+        // One horizon gives no range extension at any confidence (Strauss & Sadler 1989: the
+        // interval is unbounded for H = 1), so an extended tie would have no outer end.
+        if (settings.ties_use_extended_bracket && p.extension_undefined)
+            continue;
         const DepthBracket& b = settings.ties_use_extended_bracket ? p.extended : p.widened;
         TiePoint t;
         t.hole = p.hole;
@@ -45,8 +49,6 @@ std::vector<TiePoint> makeTiePoints(const std::vector<DatumPick>& picks,
             t.flags.emplace_back("widened_by_recovery");
         if (settings.ties_use_extended_bracket && p.extension_fraction)
             t.flags.emplace_back("extended");
-        if (settings.ties_use_extended_bracket && p.extension_undefined)
-            t.flags.emplace_back("extension_undefined");
         if (p.unreliable_cuttings_base)
             t.flags.emplace_back("cuttings_base");
         const auto key = std::make_pair(p.hole, p.event);

@@ -307,7 +307,11 @@ TEST_CASE("a single horizon leaves the extension undefined", "[unit][biostrat][e
     CHECK(p.horizon_count == 1);
     CHECK(p.extension_undefined);
     CHECK_FALSE(p.extension_fraction.has_value());
-    CHECK(p.extended == p.widened);
+    // H = 1: the confidence interval on the range end is unbounded (Strauss & Sadler 1989),
+    // so the extended bracket is open below, down to the deepest cored depth.
+    CHECK(p.extended.shallow_m == p.widened.shallow_m);
+    CHECK(p.extended.open_deep);
+    CHECK(p.extended.deep_m >= p.widened.deep_m);
 }
 
 TEST_CASE("picks reject unusable input", "[unit][biostrat][picks]") {

@@ -60,7 +60,9 @@ struct DatumPick {
     std::optional<double> extension_fraction;
     bool extension_undefined = false;
     /// widened, extended outward by alpha x observed_range_m (a top upward, clipped at the collar
-    /// 0 m; a base downward); equals widened without an extension.
+    /// 0 m; a base downward, never below a logged basement contact); equals widened without an
+    /// extension. With the extension undefined (one horizon) it is open outward: a top to the
+    /// collar, a base to the deepest cored depth.
     DepthBracket extended;
 
     /// A base (first occurrence) in a cuttings hole: caving carries younger fossils down the

@@ -19,8 +19,7 @@ struct TiePoint {
     double depth_m = 0;   ///< the pick's quoted depth (inside the bracket)
     double age_ma = 0;
     double age_sd_ma = 0;
-    /// Words, in this order when present: "widened_by_recovery", "extended",
-    /// "extension_undefined", "cuttings_base", "order_conflict", "zone_inverted",
+    /// Words, in this order when present: "widened_by_recovery", "extended", "cuttings_base", "order_conflict", "zone_inverted",
     /// "explained_inversion" (in a contradiction that a logged surface explains),
     /// "at_surface" (DatumPick::truncated_at_surface: a hiatus may have squeezed the datum onto
     /// the surface, so the age of the rock there may differ from the event's by the missing
