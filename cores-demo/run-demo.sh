@@ -31,13 +31,16 @@ run chart "$project" --hole TOR1 --extend 0.95 --page a4 --out build/demo-range-
 # Numerical dates (U-Th from activity ratios, radiocarbon calibrated) and the chain's migration.
 run dates "$project"
 run chain "$project"
-# Age-depth models (stored with their seed), accretion rates and subsidence.
-run age "$project"
-run age "$project" --by hiatus
+# Age-depth models (stored with their seed), accretion rates and subsidence. Ties over the 95 %
+# range-extended brackets; the collars stand on emerged reef flats, so the core top is open
+# (no younger than today, no older than the shallowest tie).
+model=(--extend 0.95 --ties-extended --core-top-open)
+run age "$project" "${model[@]}"
+run age "$project" "${model[@]}" --by hiatus
 for hole in KAL1 TOR1 OSS1 PEL1; do
-    run age "$project" --hole "$hole" --plot "build/demo-age-depth-$hole.png" >/dev/null
+    run age "$project" "${model[@]}" --hole "$hole" --plot "build/demo-age-depth-$hole.png" >/dev/null
 done
-run rates "$project" --porosity-law 0.5,2000
-run subsidence "$project" --per-hole
-run subsidence "$project" --hole PEL1 --plate-age-ma 60
+run rates "$project" "${model[@]}" --porosity-law 0.5,2000
+run subsidence "$project" "${model[@]}" --per-hole
+run subsidence "$project" "${model[@]}" --hole PEL1 --plate-age-ma 60
 run history "$project"

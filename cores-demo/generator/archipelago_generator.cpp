@@ -57,6 +57,8 @@ void dateSample(const Sample& s, const LithInterval& iv, double age_ma, CoreData
 
 DemoArchipelago generateArchipelago(std::uint64_t seed) {
     DemoRng rng(seed);
+    // Where each run's core really came from: a stream of its own (archipelago_generator.hpp).
+    DemoRng position_rng(seed ^ 0x5deece66dULL);
     DemoArchipelago demo;
     CoreDataset& data = demo.data;
     DemoTruth& truth = demo.truth;
@@ -77,17 +79,19 @@ DemoArchipelago generateArchipelago(std::uint64_t seed) {
         data.holes.push_back(holeRecord(plan));
 
         const auto runs = drillRuns(plan, rng);
-        const auto intervals = logIntervals(plan, runs, rng);
+        const auto offsets = drawCoreOffsets(plan, runs, position_rng);
+        const auto intervals = logIntervals(plan, runs, offsets, rng);
         auto samples = takeSamples(plan, runs, rng);
         data.runs.insert(data.runs.end(), runs.begin(), runs.end());
         data.intervals.insert(data.intervals.end(), intervals.begin(), intervals.end());
 
         for (const auto& s : samples) {
-            const double age_ma = trueAgeMa(history, s.top_m);
-            truth.samples.push_back({s.hole, s.sample, s.top_m, s.top_m, age_ma});
+            const double true_m = trueDepthOfLoggedM(runs, offsets, s.top_m);
+            const double age_ma = trueAgeMa(history, true_m);
+            truth.samples.push_back({s.hole, s.sample, s.top_m, true_m, age_ma});
             const LithInterval& iv = *intervalAt(intervals, s.hole, s.top_m);
             if (iv.rock != Rock::Basalt) {
-                SampleSetting setting{s.sample, age_ma, *trueWaterDepthM(history, s.top_m),
+                SampleSetting setting{s.sample, age_ma, *trueWaterDepthM(history, true_m),
                                       iv.texture};
                 for (auto& o : examineSample(setting, taxa, rng)) data.occurrences.push_back(o);
             }

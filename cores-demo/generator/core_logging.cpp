@@ -73,12 +73,37 @@ std::vector<CoreRun> drillRuns(const IslandPlan& plan, DemoRng& rng) {
     return runs;
 }
 
+std::vector<double> drawCoreOffsets(const IslandPlan& plan, const std::vector<CoreRun>& runs,
+                                    DemoRng& position_rng) {
+    const std::vector<double> surfaces = plannedSurfacesM(plan.history);
+    std::vector<double> offsets;
+    for (const auto& run : runs) {
+        bool cuts_surface = false;
+        for (double s : surfaces) cuts_surface = cuts_surface || (s > run.top_m && s < run.base_m);
+        const double lost_m = std::max(0.0, run.cored_m() - run.recovered_m);
+        // Always draw, so one run's surface does not shift the offsets of the runs after it.
+        const double offset_m = position_rng.uniform(0.0, 1.0) * lost_m;
+        offsets.push_back(cuts_surface ? 0.0 : offset_m);
+    }
+    return offsets;
+}
+
+double trueDepthOfLoggedM(const std::vector<CoreRun>& runs, const std::vector<double>& offsets_m,
+                          double logged_m) {
+    for (std::size_t i = 0; i < runs.size(); ++i)
+        if (logged_m >= runs[i].top_m && logged_m <= loggedBaseM(runs[i]))
+            return logged_m + offsets_m[i];
+    return logged_m; // not in logged core (a mislabelled depth): taken as read
+}
+
 std::vector<LithInterval> logIntervals(const IslandPlan& plan, const std::vector<CoreRun>& runs,
-                                       DemoRng& rng) {
+                                       const std::vector<double>& offsets_m, DemoRng& rng) {
     const TrueHoleHistory& h = plan.history;
     const std::vector<double> surfaces = plannedSurfacesM(h);
     std::vector<LithInterval> intervals;
-    for (const auto& run : runs) {
+    for (std::size_t r = 0; r < runs.size(); ++r) {
+        const CoreRun& run = runs[r];
+        const double offset_m = offsets_m[r];
         const double top_m = run.top_m;
         const double base_m = roundDp(loggedBaseM(run), 2);
         if (base_m - top_m < 0.05) continue; // a few centimetres of rubble are not logged
@@ -97,7 +122,11 @@ std::vector<LithInterval> logIntervals(const IslandPlan& plan, const std::vector
         std::sort(cuts.begin(), cuts.end());
         double piece_top_m = top_m;
         for (double piece_base_m : cuts) {
-            intervals.push_back(describeInterval(h, piece_top_m, piece_base_m, rng));
+            LithInterval iv =
+                describeInterval(h, piece_top_m + offset_m, piece_base_m + offset_m, rng);
+            iv.top_m = piece_top_m; // logged where the core was laid out
+            iv.base_m = piece_base_m;
+            intervals.push_back(std::move(iv));
             piece_top_m = piece_base_m;
         }
     }

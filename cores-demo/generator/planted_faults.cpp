@@ -23,7 +23,7 @@ TrueSample& sampleNearestAge(DemoArchipelago& demo, const std::string& hole, dou
     TrueSample* best = nullptr;
     for (auto& s : demo.truth.samples) {
         if (s.hole != hole) continue;
-        const LithInterval* iv = intervalAt(demo.data.intervals, hole, s.true_depth_m);
+        const LithInterval* iv = intervalAt(demo.data.intervals, hole, s.recorded_depth_m);
         if (!iv || iv->rock != Rock::Limestone) continue;
         bool has_date = false;
         for (const auto& d : demo.data.dates)
@@ -70,7 +70,8 @@ void plantUnflaggedReworked(DemoArchipelago& demo) {
 
 void plantMislabelledSample(DemoArchipelago& demo, DemoRng& rng) {
     TrueSample& s = sampleNearestAge(demo, "TOR1", 0.9, false);
-    const double wanted_m = s.true_depth_m + rng.uniform(6.0, 8.0);
+    const double logged_m = s.recorded_depth_m;
+    const double wanted_m = logged_m + rng.uniform(6.0, 8.0);
     for (const auto& iv : demo.data.intervals) {
         if (iv.hole != s.hole || iv.rock != Rock::Limestone || iv.base_m - 0.03 <= wanted_m) continue;
         const double recorded_m = roundDp(std::max(wanted_m, iv.top_m + 0.02), 2);
@@ -79,8 +80,8 @@ void plantMislabelledSample(DemoArchipelago& demo, DemoRng& rng) {
         s.recorded_depth_m = recorded_m;
         demo.truth.faults.push_back(
             {"mislabelled_sample", s.hole, s.sample,
-             "taken at " + metres(s.true_depth_m) + " but labelled " +
-                 metres(recorded_m - s.true_depth_m) + " deeper, at " + metres(recorded_m)});
+             "logged at " + metres(logged_m) + " but labelled " +
+                 metres(recorded_m - logged_m) + " deeper, at " + metres(recorded_m)});
         return;
     }
     throw std::logic_error("no logged core below the mislabelled sample");

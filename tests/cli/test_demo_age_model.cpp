@@ -44,13 +44,14 @@ cli::AgeModelOptions demoOptions() {
 
 } // namespace
 
-// Hidden ([.]) while it fails: with the Gibbs sampler the 95 % band holds the true age at about
-// 83 % of grid depths (target 90 %); most misses lie below the deepest tie of a hole, where the
-// grid runs on to the deepest bracket base and the age is extrapolated with the rate of the
-// deepest segment, often between two dates a metre apart. Run it with:
-// cli_tests "[demo_age_model]".
+// What the four demo holes give with the options above (4000 draws): the 95 % band holds the
+// true age at about 91 % of grid depths; 5 of the 13 hiatuses made are found (P(gap > 0) > 0.9)
+// and none where none was made; about 94 % of true mean rates between ties lie in their band.
+// Most remaining misses follow a rare taxon whose finds miss its true datum by more than the
+// 95 % range extension allows (the extension assumes finds scattered at random; facies control
+// breaks that), and the hiatuses not found lie between ties too far apart to show the gap.
 TEST_CASE("demo age models hold the true age and find the hiatuses made",
-          "[.][demo_age_model][age_model]") {
+          "[demo][demo_age_model][age_model]") {
     const DemoTruth& truth = demoData().truth;
     int rows = 0, held = 0, hiatus_made = 0, hiatus_found_made = 0, hiatus_found_other = 0;
     int rates = 0, rates_held = 0, holes_failed = 0;
@@ -155,5 +156,7 @@ TEST_CASE("demo age models hold the true age and find the hiatuses made",
               << "band " << rates_held << "/" << rates << "\n";
     CHECK(holes_failed == 0);
     CHECK(share >= 0.90);
-    CHECK(hiatus_found_made >= 1);
+    CHECK(hiatus_found_made >= 4);
+    CHECK(hiatus_found_other == 0);
+    CHECK(rates_held >= 0.9 * rates);
 }
