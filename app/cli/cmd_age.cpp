@@ -8,6 +8,8 @@
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
 
+#include "atollog/engine/basement_age.hpp"
+
 #include "atollog/db/age_model_store.hpp"
 #include "atollog/db/project_store.hpp"
 #include "atollog/db/tie_point_store.hpp"
@@ -90,7 +92,10 @@ void drawPlot(const AgeModel& m, const HoleModelInputs& in, const fs::path& out,
     for (const auto& r : m.grid) p.model.push_back({r.depth_m, r.age_q025_ma, r.age_q500_ma, r.age_q975_ma});
     const auto outlier = leadingOutlier(m);
     auto inside = [&](const AgeTie& t) { return t.shallow_m >= p.top_m && t.deep_m <= p.base_m; };
-    for (const auto& t : in.ties)
+    // The ties as the model saw them: lava dates below a logged contact pooled into one.
+    const std::vector<AgeTie> ties =
+        in.basement_contact_m ? poolBasementTies(in.ties, *in.basement_contact_m) : in.ties;
+    for (const auto& t : ties)
         if (inside(t)) p.ties.push_back(plotTie(t, outlier && *outlier == t.label, false));
     for (const auto& t : in.excluded)
         if (inside(t)) p.ties.push_back(plotTie(t, false, true));

@@ -20,6 +20,7 @@ namespace {
 constexpr double kMinorTick_mm = 1.0;
 constexpr double kLabelGap_mm = 0.8;
 constexpr double kTieLabelGap_mm = 1.0; // between a cross's end and its label
+constexpr double kSecondColumn_mm = 28.0; // how far out the crowded labels' column stands
 constexpr double kHiatusLabelInset_mm = 1.5;
 
 std::string fixed(double v, int decimals) {
@@ -271,16 +272,24 @@ void addLabels(DisplayList &list, const AgeDepthPlotInput &in, const AgeDepthPlo
         tie_requests.push_back({plainText({}, t.label, TextAnchor::Start, s.tie_label_size_pt,
                                           t.excluded ? sym::kExcludedText : sym::kInk,
                                           {ItemRole::AgeTieLabel, t.label}),
-                                {{{right, y}, TextAnchor::Start}, {{left, y}, TextAnchor::End}}});
+                                {{{right, y}, TextAnchor::Start},
+                                 {{left, y}, TextAnchor::End},
+                                 // Crowded (two dates on one sample): a second column out right.
+                                 {{right + kSecondColumn_mm, y}, TextAnchor::Start}}});
     }
-    const std::vector<Text> placed = placeLabels(tie_requests, obstacles, bounds);
+    // Ties crowd near the core top (dates every metre): search up to six lines each way.
+    const std::vector<Text> placed = placeLabels(tie_requests, obstacles, bounds, 12);
     for (std::size_t i = 0; i < placed.size(); ++i) {
         const Text &text = placed[i];
         const double tie_y = tie_requests[i].spots.front().anchor_mm.y_mm;
-        if (std::abs(text.anchor_mm.y_mm - tie_y) > 1e-9) {
+        const bool second_column =
+            std::abs(text.anchor_mm.x_mm - tie_requests[i].spots.back().anchor_mm.x_mm) < 1e-9;
+        if (std::abs(text.anchor_mm.y_mm - tie_y) > 1e-9 || second_column) {
             // From the end of the cross, just short of the label's near end.
             const double toward = text.anchor == TextAnchor::Start ? 1.0 : -1.0;
-            const double cross_end = text.anchor_mm.x_mm - toward * (kTieLabelGap_mm - 0.2);
+            const double near_x =
+                second_column ? tie_requests[i].spots.front().anchor_mm.x_mm : text.anchor_mm.x_mm;
+            const double cross_end = near_x - toward * (kTieLabelGap_mm - 0.2);
             list.add(Line{{cross_end, tie_y},
                           {text.anchor_mm.x_mm - toward * 0.3, text.anchor_mm.y_mm},
                           Stroke{sym::kLeader, sym::kLeader_mm, DashStyle::Solid},
