@@ -49,12 +49,23 @@ StreamingQuantiles::StreamingQuantiles(std::vector<QuantileRange> ranges, int bi
     above_.resize(ranges_.size());
 }
 
+void StreamingQuantiles::requireRoom(std::size_t column, std::uint64_t weight,
+                                     std::size_t count) const {
+    constexpr std::uint64_t kLimit = std::uint64_t{1} << 32;
+    if (weight >= kLimit || count >= kLimit || weight * count >= kLimit - total_[column])
+        throw std::invalid_argument("StreamingQuantiles: the weights of column " +
+                                    std::to_string(column) + " would reach 2^32 (" +
+                                    std::to_string(total_[column]) + " held, adding " +
+                                    std::to_string(count) + " x " + std::to_string(weight) + ")");
+}
+
 void StreamingQuantiles::add(std::size_t column, double value, std::uint64_t weight) {
     if (!std::isfinite(value) || std::fabs(value) >= 0x1.0p30)
         throw std::invalid_argument("StreamingQuantiles::add: value must be finite and below "
                                     "2^30 in magnitude, got " + std::to_string(value));
     if (weight == 0)
         return;
+    requireRoom(column, weight, 1);
     const QuantileRange& r = ranges_[column];
     const double pos = (value - r.lo) / (r.hi - r.lo) * bins_;
     if (pos < 0)
@@ -67,23 +78,34 @@ void StreamingQuantiles::add(std::size_t column, double value, std::uint64_t wei
     total_[column] += weight;
     min_[column] = std::min(min_[column], value);
     max_[column] = std::max(max_[column], value);
-    weighted_sum_[column] += static_cast<FixedSum>(weight) *
-                             static_cast<FixedSum>(std::llround(value * kFixedScale));
+    // Rounded half away from zero, as llround does, without the library call.
+    const double scaled = value * kFixedScale;
+    weighted_sum_[column] +=
+        static_cast<FixedSum>(weight) *
+        static_cast<FixedSum>(static_cast<std::int64_t>(scaled + (scaled >= 0 ? 0.5 : -0.5)));
 }
 
 void StreamingQuantiles::addMany(std::size_t column, const double* values, std::size_t count,
                                  std::size_t stride, std::uint64_t weight) {
     if (weight == 0 || count == 0)
         return;
+    requireRoom(column, weight, count);
+    // Check every value first (a loop the compiler vectorises), so the counting loop needs no
+    // branch for it; a bad value throws with add()'s message before anything is counted.
+    bool all_usable = true;
+    for (std::size_t j = 0; j < count; ++j)
+        all_usable &= std::fabs(values[j * stride]) < 0x1.0p30; // false for NaN
+    if (!all_usable)
+        for (std::size_t j = 0; j < count; ++j)
+            if (!(std::fabs(values[j * stride]) < 0x1.0p30))
+                add(column, values[j * stride], weight); // throws
     const QuantileRange& r = ranges_[column];
     const double lo = r.lo, width = r.hi - r.lo, bins = bins_;
-    std::uint64_t* counts = &counts_[column * static_cast<std::size_t>(bins_)];
+    std::uint32_t* counts = &counts_[column * static_cast<std::size_t>(bins_)];
     double mn = min_[column], mx = max_[column];
     FixedSum sum = 0;
     for (std::size_t j = 0; j < count; ++j) {
         const double value = values[j * stride];
-        if (!std::isfinite(value) || std::fabs(value) >= 0x1.0p30)
-            add(column, value, weight); // throws with add()'s message
         const double pos = (value - lo) / width * bins;
         if (pos < 0)
             below_[column].emplace_back(value, weight);
@@ -93,7 +115,7 @@ void StreamingQuantiles::addMany(std::size_t column, const double* values, std::
             counts[static_cast<std::size_t>(pos)] += weight;
         mn = std::min(mn, value);
         mx = std::max(mx, value);
-        // Rounded half away from zero as add() does (llround), without the library call.
+        // Rounded half away from zero, as add() does.
         const double scaled = value * kFixedScale;
         sum += static_cast<FixedSum>(
             static_cast<std::int64_t>(scaled + (scaled >= 0 ? 0.5 : -0.5)));
@@ -107,6 +129,10 @@ void StreamingQuantiles::addMany(std::size_t column, const double* values, std::
 void StreamingQuantiles::merge(const StreamingQuantiles& other) {
     if (other.ranges_.size() != ranges_.size() || other.bins_ != bins_)
         throw std::invalid_argument("StreamingQuantiles::merge: different columns or bins");
+    for (std::size_t c = 0; c < ranges_.size(); ++c)
+        if (total_[c] + other.total_[c] >= (std::uint64_t{1} << 32))
+            throw std::invalid_argument("StreamingQuantiles::merge: the weights of column " +
+                                        std::to_string(c) + " would reach 2^32");
     for (std::size_t i = 0; i < counts_.size(); ++i)
         counts_[i] += other.counts_[i];
     for (std::size_t c = 0; c < ranges_.size(); ++c) {
@@ -139,7 +165,7 @@ double StreamingQuantiles::rawQuantile(std::size_t column, double p) const {
         return out;
     const QuantileRange& r = ranges_[column];
     const double width = (r.hi - r.lo) / bins_;
-    const std::uint64_t* row = &counts_[column * static_cast<std::size_t>(bins_)];
+    const std::uint32_t* row = &counts_[column * static_cast<std::size_t>(bins_)];
     for (int b = 0; b < bins_; ++b) {
         if (row[b] == 0)
             continue;

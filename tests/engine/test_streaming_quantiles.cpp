@@ -43,7 +43,7 @@ TEST_CASE("streaming quantiles stay within one bin of exact sorting", "[streamin
     for (int i = 0; i < 20000; ++i) {
         const double v0 = 10.0 * u() * u();
         const double v1 = 3.0 * u() - 0.5;
-        const std::uint64_t w = 1 + (rng() >> 44);
+        const std::uint64_t w = 1 + (rng() >> 50); // column sums stay below 2^32
         q.add(0, v0, w);
         q.add(1, v1, w);
         c0.emplace_back(v0, w);
@@ -107,4 +107,17 @@ TEST_CASE("normal quantile (AS 241) and truncated normal draws match Boost.Math"
     CHECK(far.value >= 40.0);
     CHECK(far.log_mass == Approx(-800.0 - std::log(40.0) - 0.5 * std::log(2 * M_PI) +
                                  std::log1p(-1.0 / 1600 + 3.0 / 2560000)).epsilon(1e-12));
+}
+
+TEST_CASE("a column's weights stop short of 2^32 with a message", "[unit][quantiles][edges]") {
+    StreamingQuantiles q({{0.0, 1.0}}, 8);
+    q.add(0, 0.5, (std::uint64_t{1} << 32) - 2);
+    CHECK_THROWS_WITH(q.add(0, 0.5, 2), Catch::Contains("would reach 2^32"));
+    const double values[2] = {0.25, 0.75};
+    CHECK_THROWS_WITH(q.addMany(0, values, 2, 1, 1), Catch::Contains("would reach 2^32"));
+    q.add(0, 0.25, 1); // exactly up to 2^32 - 1 is fine
+    CHECK(q.quantile(0, 0.5) == Approx(0.5).margin(1.0 / 8)); // within one bin
+    StreamingQuantiles other({{0.0, 1.0}}, 8);
+    other.add(0, 0.5, 1);
+    CHECK_THROWS_WITH(q.merge(other), Catch::Contains("would reach 2^32"));
 }

@@ -36,9 +36,10 @@ class StreamingQuantiles {
     int bins() const { return bins_; }
 
     /// Adds a value with an integer weight (0 is ignored). Throws std::invalid_argument on a
-    /// non-finite value or |value| >= 2^30 (the fixed-point mean's limit). The sum of weights of
-    /// a column must stay below 2^64; the age model adds weight 1 per draw, with the
-    /// number of draws below 2^24.
+    /// non-finite value or |value| >= 2^30 (the fixed-point mean's limit), and when the sum of
+    /// weights of the column would reach 2^32 (bins count in 32 bits: half the memory of the
+    /// histograms, which the age model's grid columns fill at memory speed); the age model adds
+    /// weight 1 per draw, with the number of draws below 2^24.
     void add(std::size_t column, double value, std::uint64_t weight);
     /// Adds values[0], values[stride], ... (count of them) to one column, each with `weight`:
     /// the same result as count calls of add() (the mean up to its last fixed-point unit),
@@ -65,8 +66,9 @@ class StreamingQuantiles {
     double rawQuantile(std::size_t column, double p) const;
     __extension__ typedef __int128 FixedSum;
     std::vector<QuantileRange> ranges_;
+    void requireRoom(std::size_t column, std::uint64_t weight, std::size_t count) const;
     int bins_;
-    std::vector<std::uint64_t> counts_;  ///< columns x bins weights
+    std::vector<std::uint32_t> counts_;  ///< columns x bins weights (column sums < 2^32)
     std::vector<std::uint64_t> total_;   ///< per column
     std::vector<FixedSum> weighted_sum_; ///< per column: sum of weight x round(value x 2^32)
     std::vector<double> min_, max_;      ///< per column, of the values added
