@@ -109,3 +109,54 @@ TEST_CASE("straight lines reject bad input", "[york]") {
     const std::vector<double> short_sd = {1, 1};
     CHECK_THROWS_AS(yorkFit(x, short_sd, x, s), std::invalid_argument);
 }
+
+TEST_CASE("a York fit that swings about its slope is solved at York's fixed point",
+          "[york]") {
+    // Ten points with strongly correlated errors of either sign (invented for this check): the
+    // plain iteration of York et al. 2004 (section III, steps 3-6) swings about the slope for
+    // good here. The answer must still satisfy their eq. 13a, b = sum W beta V / sum W beta U,
+    // with W (eq. 13b) and beta (eq. 13c) recomputed here from the published equations.
+    const std::vector<double> x = {1.8160511033534292,  0.42087754803111221, 0.90490646318032997,
+                                   1.2628837039493408,  1.5042038877247537,  0.37104654377435625,
+                                   0.04063438807765931, 0.48437505547222326, 0.28590945881258562,
+                                   1.0636456855920604};
+    const std::vector<double> x_sd = {0.20158024667806759, 0.15596353378383312,
+                                      0.17939956709900612, 0.15446519807361087,
+                                      0.041558792826586442, 0.26090103668702974,
+                                      0.19208600027885256, 0.16445818768838469,
+                                      0.18519478064488309, 0.088250016997462169};
+    const std::vector<double> y = {2.6489850416107528,  36.175149912387475, -31.376545675272109,
+                                   7.6494625506677822,  16.035562738805076, 7.9512617936607501,
+                                   -0.070493687295798191, -0.75611355296981508,
+                                   15.27973904476921,   37.363143648482591};
+    const std::vector<double> y_sd = {20.600753140413541, 37.520082120915013, 2.9234667144609765,
+                                      3.3637807526018255, 4.385066163280297,  36.64875542782454,
+                                      17.930130529747093, 19.619220224798244, 18.125706177705137,
+                                      11.399237424552828};
+    const std::vector<double> r = {-0.5760990616364845,  -0.45106235143603113, 0.41711226948739527,
+                                   -0.17833238130063991, -0.86406976885162778, 0.89370850656668366,
+                                   0.4744238437113692,   -0.099944072310716309,
+                                   -0.045514517262208433, 0.3654062078979482};
+    const YorkFit fit = yorkFit(x, x_sd, y, y_sd, r);
+    const double b = fit.slope;
+    double sw = 0, swx = 0, swy = 0;
+    std::vector<double> W(x.size());
+    for (std::size_t i = 0; i < x.size(); ++i) {
+        const double wx = 1 / (x_sd[i] * x_sd[i]), wy = 1 / (y_sd[i] * y_sd[i]);
+        W[i] = wx * wy / (wx + b * b * wy - 2 * b * r[i] * std::sqrt(wx * wy));
+        sw += W[i];
+        swx += W[i] * x[i];
+        swy += W[i] * y[i];
+    }
+    double num = 0, den = 0;
+    for (std::size_t i = 0; i < x.size(); ++i) {
+        const double wx = 1 / (x_sd[i] * x_sd[i]), wy = 1 / (y_sd[i] * y_sd[i]);
+        const double U = x[i] - swx / sw, V = y[i] - swy / sw;
+        const double beta = W[i] * (U / wy + b * V / wx - (b * U + V) * r[i] / std::sqrt(wx * wy));
+        num += W[i] * beta * V;
+        den += W[i] * beta * U;
+    }
+    CHECK(std::isfinite(b));
+    CHECK(num / den == Approx(b).epsilon(1e-9));
+    CHECK(fit.intercept == Approx(swy / sw - b * swx / sw).epsilon(1e-9).margin(1e-9));
+}
