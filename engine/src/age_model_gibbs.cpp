@@ -156,7 +156,9 @@ void gibbsSweep(const std::vector<PreparedTie>& ties, std::mt19937_64& rng, TieD
             continue;
         const double lo = up < n ? a[up] : -kInf;
         const double hi = down < n ? a[down] : kInf;
-        a[i] = truncatedAgeDraw(t.age, lo, hi, openUniform(rng));
+        a[i] = t.age.isNormal() ? truncatedNormalBetweenBy(t.age.mean_ma(), t.age.sd_ma(), lo, hi,
+                                                           [&rng] { return openUniform(rng); })
+                                : truncatedAgeDraw(t.age, lo, hi, openUniform(rng));
     }
     for (std::size_t p = 0; p + 1 < n; ++p)
         if (trySwap(ties, order[p], order[p + 1], rng, state))

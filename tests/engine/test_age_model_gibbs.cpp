@@ -10,6 +10,9 @@
 
 #include <cmath>
 #include <numbers>
+#include <random>
+#include <utility>
+#include <vector>
 
 using namespace atollog;
 
@@ -51,6 +54,36 @@ TEST_CASE("two-sided truncated normal draws have the closed-form mean", "[age_mo
     // One side open.
     CHECK(quadratureMean(0, 1, -INFINITY, 0) == Approx(-2 * phi(0)).margin(1e-4));
     CHECK(detail::truncatedNormalBetween(0, 1, 3, 3, 0.5) == 3);
+}
+
+TEST_CASE("the rejection path of the truncated normal has the closed-form mean and variance",
+          "[age_model]") {
+    // Monte Carlo over 400,000 draws of truncatedNormalBetweenBy (uniform-proposal rejection,
+    // Robert 1995, where the interval is narrow, the inversion elsewhere) against the closed
+    // forms (Johnson, Kotz & Balakrishnan 1994, sec. 10.1): E = (phi(a) - phi(b)) / Z and
+    // Var = 1 + (a phi(a) - b phi(b)) / Z - E^2, Z = Phi(b) - Phi(a).
+    std::mt19937_64 rng(99);
+    auto u = [&rng] { return ((rng() >> 11) + 0.5) * 0x1.0p-53; };
+    for (const auto& [a, b] : std::vector<std::pair<double, double>>{
+             {-1.0, 1.2}, {0.5, 2.0}, {-2.6, -1.9}, {3.0, 3.5}, {-4.0, 4.0}, {-0.3, 0.1}}) {
+        const double z = Phi(b) - Phi(a);
+        const double mean = (phi(a) - phi(b)) / z;
+        const double var = 1 + (a * phi(a) - b * phi(b)) / z - mean * mean;
+        const int n = 400000;
+        double s = 0, ss = 0;
+        for (int k = 0; k < n; ++k) {
+            const double v = detail::truncatedNormalBetweenBy(10.0, 2.0, 10 + 2 * a, 10 + 2 * b, u);
+            REQUIRE(v >= 10 + 2 * a);
+            REQUIRE(v <= 10 + 2 * b);
+            s += v;
+            ss += v * v;
+        }
+        const double m = s / n, sd = std::sqrt(ss / n - m * m);
+        INFO("[" << a << ", " << b << "]");
+        // 5 standard errors of a mean of 400,000 draws.
+        CHECK(m == Approx(10 + 2 * mean).margin(5 * 2 * std::sqrt(var / n)));
+        CHECK(sd == Approx(2 * std::sqrt(var)).epsilon(0.01));
+    }
 }
 
 TEST_CASE("a conflicting tie no longer throws and has the largest tail score", "[age_model]") {
