@@ -282,10 +282,30 @@ CREATE TABLE age_model_rate (
 CREATE INDEX age_model_rate_model ON age_model_rate(age_model_id);
 )sql";
 
+// Version 4: composite sequences per model run: every event's rank in the best order with the
+// range of ranks it took among near-best orders, and the misfit it came with.
+constexpr const char* kSchemaV4 = R"sql(
+CREATE TABLE sequence_event (
+    id            INTEGER PRIMARY KEY,
+    model_run_id  INTEGER NOT NULL REFERENCES model_run(id) ON DELETE CASCADE,
+    rank          INTEGER NOT NULL CHECK (rank >= 1),
+    event         TEXT NOT NULL,
+    kind          TEXT NOT NULL CHECK (kind = 'base' OR kind = 'top' OR kind = 'dated'),
+    taxon         TEXT,
+    position_min  INTEGER NOT NULL,
+    position_max  INTEGER NOT NULL,
+    CHECK (position_min <= rank AND rank <= position_max),
+    UNIQUE (model_run_id, rank),
+    UNIQUE (model_run_id, event)
+);
+CREATE INDEX sequence_event_run ON sequence_event(model_run_id);
+)sql";
+
 } // namespace
 
 const std::vector<Migration>& projectMigrations() {
-    static const std::vector<Migration> migrations{{1, kSchemaV1}, {2, kSchemaV2}, {3, kSchemaV3}};
+    static const std::vector<Migration> migrations{
+        {1, kSchemaV1}, {2, kSchemaV2}, {3, kSchemaV3}, {4, kSchemaV4}};
     return migrations;
 }
 

@@ -246,5 +246,6 @@ TEST_CASE("The expected schema of the current version is what create writes", "[
                         "age_model_hiatus", "age_model_hole", "age_model_point", "age_model_rate",
                         "calibration_point", "core_run", "free_attribute", "free_column", "hole",
                         "lith_interval", "model_run", "numerical_date", "occurrence", "sample",
-                        "sea_level_point", "taxon", "tie_point", "time_scale_event", "zone"});
+                        "sea_level_point", "sequence_event", "taxon", "tie_point",
+                        "time_scale_event", "zone"});
 }

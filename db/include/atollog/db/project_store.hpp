@@ -30,7 +30,7 @@ struct ModelRunRecord {
 class ProjectStore {
   public:
     static constexpr std::int32_t kApplicationId = 0x41544C47; // "ATLG"
-    static constexpr int kSchemaVersion = 3;
+    static constexpr int kSchemaVersion = 4;
 
     /// Creates a new, empty project. Throws ProjectError if the file exists.
     static ProjectStore create(const std::filesystem::path& file);
