@@ -36,5 +36,9 @@ CommandRun addDatesCommand(CLI::App& app, const CommandIo& io);
 CommandRun addAgeCommand(CLI::App& app, const CommandIo& io);
 CommandRun addRatesCommand(CLI::App& app, const CommandIo& io);
 CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io);
+CommandRun addOrderCommand(CLI::App& app, const CommandIo& io);
+CommandRun addSequenceCommand(CLI::App& app, const CommandIo& io);
+CommandRun addLineCommand(CLI::App& app, const CommandIo& io);
+CommandRun addIsochronsCommand(CLI::App& app, const CommandIo& io);
 
 } // namespace atollog::cli

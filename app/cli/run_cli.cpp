@@ -47,6 +47,10 @@ int runCli(int argc, const char* const* argv, std::ostream& out, std::ostream& e
     add(addRatesCommand);
     add(addSubsidenceCommand);
     add(addChainCommand);
+    add(addOrderCommand);
+    add(addSequenceCommand);
+    add(addLineCommand);
+    add(addIsochronsCommand);
     add(addHistoryCommand);
 
     try {
