@@ -43,4 +43,13 @@ done
 run rates "$project" "${model[@]}" --porosity-law 0.5,2000
 run subsidence "$project" "${model[@]}" --per-hole
 run subsidence "$project" "${model[@]}" --hole PEL1 --plate-age-ma 60
+# Correlation between holes: contradictions, the composite sequence (stored with its seed), a
+# line of correlation, isochrons and an event's tie line.
+run order "$project"
+run sequence "$project" --seed 730117
+run sequence "$project" --seed 730117 --by extension --no-store
+run line "$project" --hole OSS1 --with PEL1
+run line "$project" --hole OSS1 --with PEL1 --by segment
+run line "$project" --hole PEL1 --composite --by segment
+run isochrons "$project" "${model[@]}" --ages-ma 0.125,0.45,1.0 --events "B CONV-MIN"
 run history "$project"
