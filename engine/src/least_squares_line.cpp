@@ -1,5 +1,7 @@
 #include "atollog/engine/least_squares_line.hpp"
 
+#include "scaled_moments.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <cstddef>
@@ -26,27 +28,11 @@ LeastSquaresLine leastSquaresLine(std::span<const double> x, std::span<const dou
     }
     const double dn = static_cast<double>(n);
     const double mx = sx / dn, my = sy / dn;
-    // Deviations are divided by a power of two near their largest size (exact: the sums are
-    // those of the plain deviations, scaled): squares of deviations near 1e300 overflowed into a
-    // NaN slope, and near 1e-300 underflowed to 0 ("all x equal" when they were not).
-    auto scaleOf = [&](std::span<const double> v, double mean) {
-        double largest = 0;
-        for (double e : v) largest = std::max(largest, std::fabs(e - mean));
-        return largest > 0 && std::isfinite(largest) ? std::ldexp(1.0, std::ilogb(largest))
-                                                     : largest;
-    };
-    const double kx = scaleOf(x, mx), ky_raw = scaleOf(y, my);
-    if (kx == 0)
+    if (detail::powerOfTwoScale(x, mx) == 0)
         throw std::invalid_argument("straight line: all x values are equal (" +
                                     std::to_string(x[0]) + "); the slope is undefined");
-    const double ky = ky_raw == 0 ? 1.0 : ky_raw;
-    double suu = 0, svv = 0, suv = 0;
-    for (std::size_t i = 0; i < n; ++i) {
-        const double u = (x[i] - mx) / kx, v = (y[i] - my) / ky;
-        suu += u * u;
-        svv += v * v;
-        suv += u * v;
-    }
+    const detail::ScaledMoments sm = detail::scaledMoments(x, y, mx, my);
+    const double kx = sm.kx, ky = sm.ky, suu = sm.suu, svv = sm.svv, suv = sm.suv;
     LeastSquaresLine fit;
     fit.n = static_cast<int>(n);
     const double b_scaled = suv / suu;

@@ -1,5 +1,7 @@
 #include "atollog/engine/reduced_major_axis.hpp"
 
+#include "scaled_moments.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <cstddef>
@@ -12,16 +14,6 @@ namespace {
 
 [[noreturn]] void fail(const std::string& what) {
     throw std::invalid_argument("reduced major axis: " + what);
-}
-
-/// A power of two near the largest deviation from the mean: dividing by it is exact, and keeps
-/// the sums of squares finite and non-zero for values near 1e300 or 1e-300 (as in
-/// leastSquaresLine).
-double scaleOf(std::span<const double> v, double mean) {
-    double largest = 0;
-    for (double e : v)
-        largest = std::max(largest, std::fabs(e - mean));
-    return largest > 0 && std::isfinite(largest) ? std::ldexp(1.0, std::ilogb(largest)) : largest;
 }
 
 } // namespace
@@ -43,17 +35,10 @@ ReducedMajorAxis reducedMajorAxis(std::span<const double> x, std::span<const dou
     const double mx = sum_x / dn, my = sum_y / dn;
     if (!std::isfinite(mx) || !std::isfinite(my))
         fail("the mean of x or y overflows a double; rescale the values");
-    const double kx = scaleOf(x, mx), ky_raw = scaleOf(y, my);
-    if (kx == 0)
+    if (detail::powerOfTwoScale(x, mx) == 0)
         fail("all x values are equal; the slope is undefined");
-    const double ky = ky_raw == 0 ? 1.0 : ky_raw;
-    double suu = 0, svv = 0, suv = 0;
-    for (std::size_t i = 0; i < n; ++i) {
-        const double u = (x[i] - mx) / kx, v = (y[i] - my) / ky;
-        suu += u * u;
-        svv += v * v;
-        suv += u * v;
-    }
+    const detail::ScaledMoments sm = detail::scaledMoments(x, y, mx, my);
+    const double kx = sm.kx, ky = sm.ky, suu = sm.suu, svv = sm.svv, suv = sm.suv;
     ReducedMajorAxis fit;
     fit.n = static_cast<int>(n);
     if (svv == 0) {

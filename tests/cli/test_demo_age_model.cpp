@@ -2,7 +2,7 @@
 // band holds the true age, whether the hiatuses found are the ones made, and whether the true
 // rates fall inside their bands. A model-versus-truth check on invented data, not a published
 // expected value.
-#include "archipelago_generator.hpp"
+#include "demo_data.hpp"
 #include "truth.hpp"
 
 #include "cli/age_model_inputs.hpp"
@@ -21,11 +21,6 @@ using namespace atollog;
 using namespace atollog::demo;
 
 namespace {
-
-const DemoArchipelago& demoData() {
-    static const DemoArchipelago d = generateArchipelago(kDemoSeed);
-    return d;
-}
 
 /// The options a user of the demo gives: ties over the 95 % range-extended brackets (the plain
 /// ones miss the true datum depth about two times in three: rare taxa go unseen near their range

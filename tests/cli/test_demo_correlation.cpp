@@ -2,7 +2,7 @@
 // sequence against the true order of the time-scale events (Kendall's tau), and the order
 // contradictions the event-order graph finds against the faults the generator planted. A
 // model-versus-truth check on invented data, not a published expected value.
-#include "archipelago_generator.hpp"
+#include "demo_data.hpp"
 #include "truth.hpp"
 
 #include "cli/correlation_inputs.hpp"
@@ -20,11 +20,6 @@ using namespace atollog;
 using namespace atollog::demo;
 
 namespace {
-
-const DemoArchipelago& demoData() {
-    static const DemoArchipelago d = generateArchipelago(kDemoSeed);
-    return d;
-}
 
 const CorrelationData& demoCorrelation() {
     static const CorrelationData c = cli::gatherCorrelationData(demoData().data, {});

@@ -2,7 +2,7 @@
 // U-Th and calibrated radiocarbon age should agree with the sample's true age within about 3 sd;
 // the planted altered coral must be caught by the d234U screen. A model-versus-truth check on
 // invented data (DEVELOPERS.md: demo data is never the expected value of a published check).
-#include "archipelago_generator.hpp"
+#include "demo_data.hpp"
 
 #include "atollog/engine/date_ages.hpp"
 
@@ -17,11 +17,6 @@ using namespace atollog;
 using namespace atollog::demo;
 
 namespace {
-
-const DemoArchipelago& demoData() {
-    static const DemoArchipelago d = generateArchipelago(kDemoSeed);
-    return d;
-}
 
 bool hasFlag(const DateAge& d, const std::string& f) {
     return std::find(d.flags.begin(), d.flags.end(), f) != d.flags.end();

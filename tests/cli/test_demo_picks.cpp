@@ -1,7 +1,7 @@
 // Datum picks on the invented demo archipelago, compared with the generator's truth: how often
 // the brackets hold the true event depth, and why they miss. This is a model-versus-truth check
 // on invented data (DEVELOPERS.md: demo data is never the expected value of a published check).
-#include "archipelago_generator.hpp"
+#include "demo_data.hpp"
 
 #include "atollog/engine/biostrat_run.hpp"
 
@@ -17,11 +17,6 @@ using namespace atollog;
 using namespace atollog::demo;
 
 namespace {
-
-const DemoArchipelago& demoData() {
-    static const DemoArchipelago d = generateArchipelago(kDemoSeed);
-    return d;
-}
 
 struct Coverage {
     int compared = 0;
