@@ -1,5 +1,6 @@
 // `isochrons`: where given ages lie in every hole (depth quantiles from each hole's age-depth
 // model), and where given events were picked in every hole (tie lines between columns).
+#include "cli/age_list.hpp"
 #include "cli/age_model_inputs.hpp"
 #include "cli/command.hpp"
 #include "cli/correlation_inputs.hpp"
@@ -20,32 +21,6 @@ namespace fs = std::filesystem;
 
 namespace atollog::cli {
 
-namespace {
-
-std::vector<double> parseAges(const std::string& text) {
-    std::vector<double> ages;
-    std::stringstream in(text);
-    std::string item;
-    while (std::getline(in, item, ',')) {
-        std::size_t used = 0;
-        double v = 0;
-        try {
-            v = std::stod(item, &used);
-        } catch (const std::exception&) {
-            used = 0;
-        }
-        if (used != item.size() || !(v >= 0) || !std::isfinite(v))
-            throw std::invalid_argument("--ages-ma: '" + item +
-                                        "' is not an age; give ages in Ma >= 0 separated by "
-                                        "commas, e.g. --ages-ma 0.125,0.4");
-        ages.push_back(v);
-    }
-    if (ages.empty())
-        throw std::invalid_argument("--ages-ma: give at least one age in Ma");
-    return ages;
-}
-
-} // namespace
 
 CommandRun addIsochronsCommand(CLI::App& app, const CommandIo& io) {
     struct Options {
@@ -75,7 +50,7 @@ CommandRun addIsochronsCommand(CLI::App& app, const CommandIo& io) {
         const bool csv = o->csv;
         using A = TablePrinter::Align;
         if (!o->ages.empty()) {
-            const std::vector<double> ages = parseAges(o->ages);
+            const std::vector<double> ages = parseAgeList(o->ages, "--ages-ma");
             TablePrinter t({{"age_ma", A::Right}, {"hole"}, {"depth_q025_m", A::Right},
                             {"depth_q500_m", A::Right}, {"depth_q975_m", A::Right}, {"where"}});
             io.progress("building age-depth models");
