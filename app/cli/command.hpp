@@ -40,5 +40,6 @@ CommandRun addOrderCommand(CLI::App& app, const CommandIo& io);
 CommandRun addSequenceCommand(CLI::App& app, const CommandIo& io);
 CommandRun addLineCommand(CLI::App& app, const CommandIo& io);
 CommandRun addIsochronsCommand(CLI::App& app, const CommandIo& io);
+CommandRun addPanelCommand(CLI::App& app, const CommandIo& io);
 
 } // namespace atollog::cli

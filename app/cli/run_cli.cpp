@@ -51,6 +51,7 @@ int runCli(int argc, const char* const* argv, std::ostream& out, std::ostream& e
     add(addSequenceCommand);
     add(addLineCommand);
     add(addIsochronsCommand);
+    add(addPanelCommand);
     add(addHistoryCommand);
 
     try {

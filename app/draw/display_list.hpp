@@ -49,6 +49,18 @@ enum class ItemRole {
     Surface,
     TextureScale, // the texture-class ticks and names above the lithology track
     DrilledBase,  // the line and label at the hole's drilled base (key: the hole id)
+    // Correlation panel (keys: the event id for ties, the isochron label for isochrons, the hole
+    // id for column notes, the tick value as labelled for the shared axis).
+    PanelAxis,      // the shared vertical axis on the left: line, ticks and its title
+    PanelAxisLabel, // its tick labels
+    SeaLevel,       // the sea-level line across an elevation panel (key "0")
+    ColumnNote,     // a note over a column's header, e.g. "not flattened"
+    TieLine,        // observed levels joined column to column, and the bracket ends
+    TieBand,        // the brackets joined column to column: one translucent polygon per pair
+    TieLabel,
+    Isochron,     // the median depth joined column to column
+    IsochronBand, // the 2.5-97.5 % depth range joined column to column
+    IsochronLabel,
 };
 
 /// The role and the identifier of the datum an item draws (taxon id, event id, sample id).

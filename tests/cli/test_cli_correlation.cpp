@@ -7,6 +7,8 @@
 
 #include <catch2/catch.hpp>
 
+#include <fstream>
+#include <iterator>
 #include <sstream>
 #include <string>
 
@@ -118,4 +120,29 @@ TEST_CASE("isochrons give depth quantiles per hole and event tie lines", "[unit]
     CHECK(bad.exit_code == 2);
     CHECK(bad.err.find("'soon' is not an age") != std::string::npos);
     CHECK(runAtollog({"isochrons", p}).exit_code == 2);
+}
+
+TEST_CASE("panel draws the holes with ties and isochrons headless", "[unit][cli][correlation][panel]") {
+    TempDir tmp("panel");
+    const auto p = importedDemo(tmp);
+    const auto svg = (tmp / "panel.svg").string();
+    const auto r = runAtollog({"panel", p, "--out", svg, "--events", "B CONV-MIN,T LEPT-TEN",
+                               "--ages-ma", "0.45", "--draws", "300", "--outlier-draws", "0",
+                               "--core-top-open", "--flatten", "B CONV-MIN", "--date",
+                               "2026-12-01"});
+    INFO(r.err);
+    REQUIRE(r.exit_code == 0);
+    CHECK(r.out.find("4 holes, 2 tie lines, 1 isochrons") != std::string::npos);
+    std::ifstream in(svg);
+    const std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+    for (const char* hole : {"KAL1", "TOR1", "OSS1", "PEL1"})
+        CHECK(text.find(hole) != std::string::npos);
+    CHECK(text.find("2026-12-01") != std::string::npos);
+    CHECK(text.find("<image") == std::string::npos);
+    const auto bad = runAtollog({"panel", p, "--out", svg, "--events", "B CONV-MIN", "--flatten",
+                                 "T NOWHERE"});
+    CHECK(bad.exit_code == 2);
+    CHECK(bad.err.find("T NOWHERE") != std::string::npos);
+    const auto wrong_ext = runAtollog({"panel", p, "--out", (tmp / "panel.bmp").string()});
+    CHECK(wrong_ext.exit_code == 2);
 }
