@@ -11,6 +11,7 @@ namespace atollog::draw {
 namespace {
 
 constexpr double kPatternLine_mm = 0.15;
+constexpr double kSmallestPatternedBox_px = 3.0;
 
 // FGDC-STD-013-2006 pattern 627 (limestone) is a brick bond: courses of horizontal lines with
 // vertical joints offset by half a brick in alternate courses.
@@ -219,6 +220,14 @@ void paintDomes(QPainter &p, const RectMm &box) {
 
 void paintFillPattern(QPainter &p, FillPattern pattern, const RectMm &box) {
     if (pattern == FillPattern::None) {
+        return;
+    }
+    // A box under a few device pixels shows no pattern, only a smudge of its lines: skip it
+    // (its fill colour is still painted). Why: a whole-campaign panel at screen or poster size
+    // has tens of thousands of such boxes, and their line work was most of the painting time.
+    const QRectF device = p.worldTransform().mapRect(
+        QRectF(box.left_mm, box.top_mm, box.width_mm, box.height_mm));
+    if (device.height() < kSmallestPatternedBox_px || device.width() < kSmallestPatternedBox_px) {
         return;
     }
     p.save();

@@ -203,7 +203,9 @@ PaintStats paintDisplayList(QPainter &painter, const DisplayList &list, const Re
             ++stats.culled;
             continue;
         }
-        painter.save();
+        // No save/restore per item: every painter below sets the pen and brush it uses, and
+        // text and patterns keep their own transform and clip; the pair cost a fifth of a
+        // large panel's painting.
         std::visit(
             [&](const auto &i) {
                 using T = std::decay_t<decltype(i)>;
@@ -222,7 +224,6 @@ PaintStats paintDisplayList(QPainter &painter, const DisplayList &list, const Re
                 }
             },
             item);
-        painter.restore();
         ++stats.painted;
     }
     painter.restore();
