@@ -52,4 +52,9 @@ run line "$project" --hole OSS1 --with PEL1
 run line "$project" --hole OSS1 --with PEL1 --by segment
 run line "$project" --hole PEL1 --composite --by segment
 run isochrons "$project" "${model[@]}" --ages-ma 0.125,0.45,1.0 --events "B CONV-MIN"
+# The correlation panel: columns, tie lines and isochrons, as the viewer shows it.
+run panel "$project" "${model[@]}" --out build/demo-panel.png --scale 1000 \
+    --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --ages-ma 0.125,1.0
+run panel "$project" "${model[@]}" --out build/demo-panel-flat.svg --scale 1000 \
+    --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --axis elevation --flatten "T LEPT-TEN"
 run history "$project"
