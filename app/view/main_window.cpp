@@ -1,0 +1,328 @@
+#include "view/main_window.hpp"
+
+#include "cli/figure_file.hpp"
+#include "draw/panel_layout.hpp"
+#include "view/panel_canvas.hpp"
+#include "view/project_panel.hpp"
+#include "view/selection_details.hpp"
+#include "view/side_pane.hpp"
+
+#include <QActionGroup>
+#include <QApplication>
+#include <QCloseEvent>
+#include <QComboBox>
+#include <QDate>
+#include <QDockWidget>
+#include <QFileDialog>
+#include <QFileInfo>
+#include <QInputDialog>
+#include <QLabel>
+#include <QMenu>
+#include <QMenuBar>
+#include <QMessageBox>
+#include <QSettings>
+#include <QStatusBar>
+#include <QToolBar>
+
+#include <algorithm>
+#include <exception>
+
+namespace atollog::view {
+
+namespace {
+
+constexpr const char *kGeometryKey = "window/geometry";
+constexpr const char *kStateKey = "window/state";
+constexpr const char *kLastProjectKey = "project/last";
+
+/// Drafting scales offered; 1:500 is the panel's own default (PanelView).
+constexpr int kScales[] = {100, 200, 500, 1000, 2000, 5000};
+
+QString exceptionText() {
+    try {
+        throw;
+    } catch (const std::exception &e) {
+        return QString::fromStdString(e.what());
+    } catch (...) {
+        return QObject::tr("an unknown error");
+    }
+}
+
+} // namespace
+
+MainWindow::MainWindow(QWidget *parent) : QMainWindow(parent) {
+    setWindowTitle(tr("atollog-view"));
+    canvas_ = new PanelCanvas(this);
+    setCentralWidget(canvas_);
+
+    side_ = new SidePane(this);
+    auto *dock = new QDockWidget(tr("Panel"), this);
+    dock->setObjectName(QStringLiteral("side-dock")); // saveState needs names
+    dock->setWidget(side_);
+    addDockWidget(Qt::RightDockWidgetArea, dock);
+
+    readout_ = new QLabel(this);
+    statusBar()->addPermanentWidget(readout_);
+
+    sink_ = [this](const QString &title, const QString &text) {
+        QMessageBox::critical(this, title, text);
+    };
+
+    buildToolBar();
+    buildMenus();
+    menuBar()->findChild<QMenu *>(QStringLiteral("view-menu"))->addAction(dock->toggleViewAction());
+
+    connect(side_, &SidePane::choiceChanged, this, [this] {
+        refreshFlattenChoices();
+        relayout();
+    });
+    connect(canvas_, &PanelCanvas::itemSelected, this, &MainWindow::onItemSelected);
+    connect(canvas_, &PanelCanvas::columnOrderChanged, this, &MainWindow::onColumnOrderChanged);
+    connect(canvas_, &PanelCanvas::cursorReadout, readout_, &QLabel::setText);
+
+    QSettings settings;
+    restoreGeometry(settings.value(kGeometryKey).toByteArray());
+    restoreState(settings.value(kStateKey).toByteArray());
+}
+
+void MainWindow::buildToolBar() {
+    auto *bar = addToolBar(tr("Look"));
+    bar->setObjectName(QStringLiteral("look-bar"));
+
+    auto *axes = new QActionGroup(this);
+    depth_ = new QAction(tr("&Depth axis"), axes);
+    elevation_ = new QAction(tr("&Elevation axis"), axes);
+    depth_->setCheckable(true);
+    elevation_->setCheckable(true);
+    depth_->setChecked(true);
+    depth_->setToolTip(tr("Depth below each collar"));
+    elevation_->setToolTip(tr("Elevation relative to present sea level"));
+    connect(axes, &QActionGroup::triggered, this, [this] { relayout(); });
+    bar->addAction(depth_);
+    bar->addAction(elevation_);
+    bar->addSeparator();
+
+    bar->addWidget(new QLabel(tr(" Flatten on: "), bar));
+    flatten_ = new QComboBox(bar);
+    flatten_->setMinimumContentsLength(14);
+    flatten_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
+    flatten_->addItem(tr("(nothing)"), QString());
+    connect(flatten_, &QComboBox::currentIndexChanged, this, [this] { relayout(); });
+    bar->addWidget(flatten_);
+    bar->addSeparator();
+
+    bar->addWidget(new QLabel(tr(" Vertical scale: "), bar));
+    scale_ = new QComboBox(bar);
+    for (const int n : kScales) {
+        scale_->addItem(QStringLiteral("1:%1").arg(n), n);
+    }
+    scale_->setCurrentIndex(scale_->findData(static_cast<int>(view_.scale_ratio)));
+    connect(scale_, &QComboBox::currentIndexChanged, this, [this] {
+        // A new scale changes the page size: fit so the whole panel stays in sight.
+        relayout();
+        canvas_->fitToWindow();
+    });
+    bar->addWidget(scale_);
+}
+
+void MainWindow::buildMenus() {
+    QMenu *file = menuBar()->addMenu(tr("&File"));
+    QAction *open = file->addAction(tr("&Open project..."), this, &MainWindow::chooseAndOpen);
+    open->setShortcut(QKeySequence::Open);
+    QAction *reopen = file->addAction(tr("&Reopen last project"), this, [this] {
+        const QString last = QSettings().value(kLastProjectKey).toString();
+        if (!last.isEmpty()) {
+            openProject(last);
+        }
+    });
+    reopen->setShortcut(QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_O));
+    QAction *exporting = file->addAction(tr("&Export..."), this, &MainWindow::chooseAndExport);
+    exporting->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_E));
+    file->addSeparator();
+    QAction *quit = file->addAction(tr("&Quit"), this, &QWidget::close);
+    quit->setShortcut(QKeySequence::Quit);
+
+    QMenu *view = menuBar()->addMenu(tr("&View"));
+    view->setObjectName(QStringLiteral("view-menu"));
+    QAction *fit = view->addAction(tr("&Fit to window"), canvas_, &PanelCanvas::fitToWindow);
+    fit->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_0));
+    QAction *in = view->addAction(tr("Zoom &in"), canvas_, &PanelCanvas::zoomIn);
+    // Ctrl+= too: on many keyboards "+" needs Shift, and people press Ctrl and the "=" key.
+    in->setShortcuts({QKeySequence::ZoomIn, QKeySequence(Qt::CTRL | Qt::Key_Equal)});
+    QAction *out = view->addAction(tr("Zoom &out"), canvas_, &PanelCanvas::zoomOut);
+    out->setShortcut(QKeySequence::ZoomOut);
+    view->addSeparator();
+    view->addAction(depth_);
+    view->addAction(elevation_);
+    view->addSeparator();
+}
+
+bool MainWindow::openProject(const QString &path) {
+    QApplication::setOverrideCursor(Qt::WaitCursor);
+    try {
+        ProjectPanel panel = loadProjectPanel(path.toStdString());
+        QApplication::restoreOverrideCursor();
+        PanelChoice choice;
+        for (const auto &column : panel.full.columns) {
+            choice.hole_order.push_back(column.hole);
+        }
+        choice.shown_events = {panel.default_events.begin(), panel.default_events.end()};
+        choice.shown_isochrons = {panel.default_isochrons.begin(), panel.default_isochrons.end()};
+        project_path_ = QFileInfo(path).absoluteFilePath();
+        setWindowTitle(tr("%1 - atollog-view").arg(QFileInfo(path).fileName()));
+        QSettings().setValue(kLastProjectKey, project_path_);
+        showPanel(std::move(panel.full), choice);
+        return true;
+    } catch (...) {
+        QApplication::restoreOverrideCursor();
+        report(tr("Cannot open the project"),
+               tr("%1\n\ncould not be opened:\n%2").arg(path, exceptionText()));
+        return false;
+    }
+}
+
+void MainWindow::showPanel(draw::PanelInput full, const PanelChoice &choice) {
+    full_ = std::move(full);
+    side_->setContent(full_, choice);
+    side_->setDetails(tr("Click an item in the panel."));
+    refreshFlattenChoices();
+    relayout();
+    canvas_->fitToWindow();
+}
+
+void MainWindow::refreshFlattenChoices() {
+    const QString current = flatten_->currentData().toString();
+    const PanelChoice choice = side_->choice();
+    QSignalBlocker quiet(flatten_); // relayout once, by the caller
+    flatten_->clear();
+    flatten_->addItem(tr("(nothing)"), QString());
+    // Only what is shown: flattening on a hidden tie would leave the panel looking unflattened.
+    for (const auto &tie : full_.ties) {
+        if (choice.shown_events.count(tie.event)) {
+            const QString name = QString::fromStdString(tie.event);
+            flatten_->addItem(tr("tie %1").arg(name), name);
+        }
+    }
+    for (const auto &iso : full_.isochrons) {
+        if (choice.shown_isochrons.count(iso.label)) {
+            const QString name = QString::fromStdString(iso.label);
+            flatten_->addItem(tr("isochron %1").arg(name), name);
+        }
+    }
+    flatten_->setCurrentIndex(std::max(0, flatten_->findData(current)));
+}
+
+void MainWindow::relayout() {
+    try {
+        shown_ = choosePanelContent(full_, side_->choice());
+        view_.axis = elevation_->isChecked() ? draw::PanelAxis::Elevation : draw::PanelAxis::Depth;
+        const QString flatten = flatten_->currentData().toString();
+        view_.flatten_on =
+            flatten.isEmpty() ? std::nullopt : std::optional<std::string>(flatten.toStdString());
+        view_.scale_ratio = scale_->currentData().toInt();
+        view_.date_text = QDate::currentDate().toString(Qt::ISODate).toStdString();
+        PanelScene scene;
+        if (!shown_.columns.empty()) {
+            scene.list = draw::layoutPanel(shown_, view_, &scene.geometry);
+        }
+        for (const auto &column : shown_.columns) {
+            scene.holes.push_back(column.hole);
+        }
+        scene.axis = view_.axis;
+        scene.flatten_on = view_.flatten_on;
+        canvas_->setScene(std::move(scene));
+    } catch (...) {
+        canvas_->setScene(PanelScene{});
+        report(tr("Cannot draw the panel"), exceptionText());
+    }
+}
+
+void MainWindow::onItemSelected(draw::ItemRole role, const QString &key) {
+    const QString text = selectionDetails(shown_, role, key);
+    side_->setDetails(text.isEmpty() ? tr("Click an item in the panel.") : text);
+}
+
+void MainWindow::onColumnOrderChanged(const QList<int> &order) {
+    std::vector<std::string> holes;
+    for (const int i : order) {
+        if (i < 0 || static_cast<std::size_t>(i) >= shown_.columns.size()) {
+            return; // from a stale layout; the next one reports the real columns
+        }
+        holes.push_back(shown_.columns[static_cast<std::size_t>(i)].hole);
+    }
+    side_->setHoleOrder(holes);
+    relayout();
+}
+
+void MainWindow::chooseAndOpen() {
+    const QString start = QFileInfo(QSettings().value(kLastProjectKey).toString()).absolutePath();
+    const QString path = QFileDialog::getOpenFileName(
+        this, tr("Open project"), start, tr("atollog projects (*.atollog);;All files (*)"));
+    if (!path.isEmpty()) {
+        openProject(path);
+    }
+}
+
+void MainWindow::chooseAndExport() {
+    if (shown_.columns.empty()) {
+        report(tr("Nothing to export"), tr("Open a project first."));
+        return;
+    }
+    QString filter;
+    QString path = QFileDialog::getSaveFileName(
+        this, tr("Export panel"), QFileInfo(project_path_).absolutePath(),
+        tr("SVG drawing (*.svg);;PDF document (*.pdf);;PNG image (*.png)"), &filter);
+    if (path.isEmpty()) {
+        return;
+    }
+    if (QFileInfo(path).suffix().isEmpty()) {
+        path += filter.contains(QLatin1String("pdf"))   ? QStringLiteral(".pdf")
+                : filter.contains(QLatin1String("png")) ? QStringLiteral(".png")
+                                                        : QStringLiteral(".svg");
+    }
+    const QString suffix = QFileInfo(path).suffix().toLower();
+    draw::PdfPageSize page = draw::PdfPageSize::FitChart;
+    double dpi = 300;
+    bool ok = true;
+    if (suffix == QLatin1String("pdf")) {
+        const QStringList pages{tr("Fit the panel"), tr("A4"), tr("A3"), tr("Letter")};
+        const QString chosen =
+            QInputDialog::getItem(this, tr("Page size"), tr("Page:"), pages, 0, false, &ok);
+        const draw::PdfPageSize sizes[] = {draw::PdfPageSize::FitChart, draw::PdfPageSize::A4,
+                                           draw::PdfPageSize::A3, draw::PdfPageSize::Letter};
+        page = sizes[std::max<qsizetype>(0, pages.indexOf(chosen))];
+    } else if (suffix == QLatin1String("png")) {
+        dpi = QInputDialog::getInt(this, tr("Resolution"), tr("Dots per inch:"), 300, 72, 1200, 50,
+                                   &ok);
+    }
+    if (ok) {
+        exportTo(path, page, dpi);
+    }
+}
+
+bool MainWindow::exportTo(const QString &path, draw::PdfPageSize page, double png_dpi) {
+    try {
+        cli::writeFigure(canvas_->scene().list, path.toStdString(), "export file",
+                         shown_.title.empty() ? "correlation panel" : shown_.title, png_dpi, page);
+        statusBar()->showMessage(tr("Exported %1").arg(path), 5000);
+        return true;
+    } catch (...) {
+        report(tr("Cannot export"), tr("%1\n\n%2").arg(path, exceptionText()));
+        return false;
+    }
+}
+
+void MainWindow::report(const QString &title, const QString &text) {
+    if (sink_) {
+        sink_(title, text);
+    }
+}
+
+void MainWindow::closeEvent(QCloseEvent *event) {
+    QSettings settings;
+    settings.setValue(kGeometryKey, saveGeometry());
+    settings.setValue(kStateKey, saveState());
+    QMainWindow::closeEvent(event);
+}
+
+} // namespace atollog::view

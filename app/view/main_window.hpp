@@ -1,0 +1,75 @@
+#pragma once
+// The viewer's window: the panel canvas in the middle, the side pane in a dock, menus for
+// opening, exporting and looking. Every change of what is shown or how rebuilds the panel's
+// input and view from the full project panel and lays it out again; any exception from loading
+// or layout becomes a message, never a crash.
+#include "draw/display_list_export.hpp"
+#include "draw/panel_input.hpp"
+#include "view/message_sink.hpp"
+#include "view/panel_choice.hpp"
+
+#include <QMainWindow>
+
+class QAction;
+class QComboBox;
+class QLabel;
+
+namespace atollog::view {
+
+class PanelCanvas;
+class SidePane;
+
+class MainWindow : public QMainWindow {
+    Q_OBJECT
+
+  public:
+    explicit MainWindow(QWidget *parent = nullptr);
+
+    /// Loads a project file and shows its panel; false (after a message) when it cannot.
+    bool openProject(const QString &path);
+    /// Shows a panel's full content with this choice and fits it to the window.
+    void showPanel(draw::PanelInput full, const PanelChoice &choice);
+    /// Writes the panel as shown (same view, same vertical scale) to `path`, the format from its
+    /// extension; false (after a message) when it cannot.
+    bool exportTo(const QString &path, draw::PdfPageSize page, double png_dpi);
+
+    void setMessageSink(MessageSink sink) { sink_ = std::move(sink); }
+
+    PanelCanvas *canvas() const { return canvas_; }
+    SidePane *sidePane() const { return side_; }
+    QComboBox *flattenCombo() const { return flatten_; }
+    QComboBox *scaleCombo() const { return scale_; }
+    QAction *elevationAction() const { return elevation_; }
+    const draw::PanelInput &shownInput() const { return shown_; }
+    const draw::PanelView &panelView() const { return view_; }
+
+  protected:
+    void closeEvent(QCloseEvent *event) override;
+
+  private:
+    void buildMenus();
+    void buildToolBar();
+    void relayout();
+    void refreshFlattenChoices();
+    void chooseAndOpen();
+    void chooseAndExport();
+    void onItemSelected(draw::ItemRole role, const QString &key);
+    void onColumnOrderChanged(const QList<int> &order);
+    void report(const QString &title, const QString &text);
+
+    PanelCanvas *canvas_ = nullptr;
+    SidePane *side_ = nullptr;
+    QComboBox *flatten_ = nullptr;
+    QComboBox *scale_ = nullptr;
+    QAction *depth_ = nullptr;
+    QAction *elevation_ = nullptr;
+    QLabel *readout_ = nullptr;
+    MessageSink sink_;
+
+    draw::PanelInput full_;  ///< everything the project offers
+    draw::PanelInput shown_; ///< as chosen in the side pane, what was laid out
+    draw::PanelView view_;
+    QString project_path_;
+};
+
+} // namespace atollog::view
