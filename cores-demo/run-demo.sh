@@ -6,7 +6,7 @@ cd "$(dirname "$0")/.."
 
 bash .ci/install-deps
 cmake --preset default >/dev/null
-cmake --build --preset default -j "$(nproc)" --target atollog
+cmake --build --preset default -j "$(nproc)" --target atollog atollog-view
 
 atollog=build/app/atollog
 project=build/demo.atollog
@@ -58,3 +58,5 @@ run panel "$project" "${model[@]}" --out build/demo-panel.png --scale 1000 \
 run panel "$project" "${model[@]}" --out build/demo-panel-flat.svg --scale 1000 \
     --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --axis elevation --flatten "T LEPT-TEN"
 run history "$project"
+echo
+echo "The same panel in a window: build/app/atollog-view $project"
