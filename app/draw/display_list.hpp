@@ -80,7 +80,7 @@ struct Stroke {
 /// Area fills drawn as vector line work (never as bitmaps), so SVG and PDF stay sharp; each is
 /// anchored at the scene origin, so boxes that touch continue one another. The numbered ones
 /// follow the style of FGDC-STD-013-2006 section 37 (numbers and names checked against a
-/// transcription of the standard's pattern chart; the line work is drawn from memory, see
+/// copy of the standard's pattern chart; the line work is drawn from memory, see
 /// fill_pattern_painter.cpp): Limestone 627, Dolostone 642, Sand 607 (massive sand or
 /// sandstone), Clay 620 (clay or clay shale), Gravel 601 (gravel or conglomerate), Basalt 717
 /// (basaltic flows), Volcaniclastic 711 (tuffaceous rock). The standard has no reef pattern, so

@@ -1,5 +1,5 @@
 // Lithology fill patterns, checked in pixels at 10 px per mm. Pattern numbers are those of
-// FGDC-STD-013-2006 section 37 (checked against a transcription of the standard's pattern
+// FGDC-STD-013-2006 section 37 (checked against a copy of the standard's pattern
 // chart); the line work follows the standard's style but is drawn from memory, so the checks
 // test the trait that tells each pattern apart, not a copy of the chart.
 #include "draw/paint_display_list.hpp"

@@ -49,7 +49,7 @@ TEST_CASE("Column lists one box per interval, one tick per sample, boxes per run
 
     // Patterns follow the rock; organically bound textures take the reef pattern. FGDC-STD-013-
     // 2006 section 37: 627 limestone, 642 dolostone, 607 massive sand, 620 clay, 601 gravel,
-    // 717 basaltic flows, 711 tuffaceous rock (numbers checked against a transcription of the
+    // 717 basaltic flows, 711 tuffaceous rock (numbers checked against a copy of the
     // standard's pattern chart).
     const std::map<std::string, FillPattern> expected{
         {"4.20-7.50", FillPattern::Limestone},
