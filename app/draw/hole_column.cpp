@@ -60,7 +60,9 @@ std::optional<RectMm> boxInWindow(const DepthScale &scale, const DepthWindow &w,
     if (base <= top) {
         return std::nullopt;
     }
-    return RectMm{x0_mm, scale.y_mm(top), width_mm, scale.y_mm(base) - scale.y_mm(top)};
+    // The base is drawn on the shallower side of a step of a warped scale (age axis), so a unit
+    // resting on a surface ends where the time gap under it opens.
+    return RectMm{x0_mm, scale.y_mm(top), width_mm, scale.yAbove_mm(base) - scale.y_mm(top)};
 }
 
 void addDepthAxis(DisplayList &list, const HoleColumnView &view, const HoleColumnStyle &s,
@@ -174,7 +176,7 @@ void addSurfaces(DisplayList &list, const HoleColumnInput &in, const DepthScale 
         const SurfaceLook look = surfaceLook(*iv.base_surface);
         list.add(
             Polyline{surfacePath(look, x.lithology_left_mm - kSurfaceOverhang_mm,
-                                 x.lithology_right_mm + kSurfaceOverhang_mm, scale.y_mm(iv.base_m)),
+                                 x.lithology_right_mm + kSurfaceOverhang_mm, scale.yAbove_mm(iv.base_m)),
                      look.stroke,
                      {ItemRole::Surface, std::string(surfaceWord(*iv.base_surface))}});
         legend.addSurface(*iv.base_surface);

@@ -63,6 +63,22 @@ struct ColumnSample {
     double depth_m = 0.0;
 };
 
+/// One row of the hole's age model as drawn: age quantiles (Ma) at a depth (m below the collar).
+struct ColumnAgeRow {
+    double depth_m = 0.0;
+    double q025_ma = 0.0;
+    double q500_ma = 0.0;
+    double q975_ma = 0.0;
+};
+
+/// The hole's age model on its depth grid, depth increasing. At a logged surface the grid holds
+/// two rows at one depth, the age just above the surface first, then the age at and below it:
+/// the jump between them is the time the surface stands for. Used by the age-model track and by
+/// the panel's age axis (depth to age through the medians). Empty rows: the hole has no model.
+struct ColumnAgeModel {
+    std::vector<ColumnAgeRow> rows;
+};
+
 /// Which tracks the column shows; a hidden track takes no room.
 struct HoleColumnTracks {
     bool depth_axis = true;
@@ -81,6 +97,7 @@ struct HoleColumnInput {
     std::vector<ColumnRun> runs;
     std::vector<ColumnInterval> intervals; // any order; they must not overlap
     std::vector<ColumnSample> samples;
+    ColumnAgeModel age_model;
     HoleColumnTracks tracks;
 };
 

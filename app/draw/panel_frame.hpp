@@ -13,9 +13,12 @@ namespace atollog::draw {
 
 struct PanelColumnFrame {
     HoleColumnTrackPositions x;
-    double offset_m = 0.0;   ///< axis value = depth + offset_m
+    double offset_m = 0.0;   ///< depth and elevation axes: axis value = depth + offset_m
     bool flattened = false;  ///< shifted to the flattening level
     bool has_note = false;   ///< "not flattened" over the header
+    bool no_age_model = false; ///< age axis: the hole has no model to stand on it
+    /// Depth to paper y for this column (linear, or through its age model on an age axis).
+    std::optional<DepthScale> scale;
     /// The column's depth window (m below its collar); unset when nothing of it is in the window.
     std::optional<HoleColumnView> view;
     double header_height_mm = 0.0;
@@ -23,20 +26,21 @@ struct PanelColumnFrame {
 
 struct PanelFrame {
     std::vector<PanelColumnFrame> columns;
-    double axis_top_m = 0.0; ///< axis value at the top of the body
+    double axis_top_m = 0.0; ///< axis value at the top of the body (m, or Ma on an age axis)
     double axis_base_m = 0.0;
-    double mm_per_m = 2.0;
+    double mm_per_axis_unit = 2.0; ///< paper mm per axis unit (m, or Myr on an age axis)
     double axis_origin_y_mm = 0.0; ///< y of axis_top_m
     double axis_x_mm = 0.0;        ///< the shared axis line
     double title_top_mm = 0.0;
 
-    double y_mm(double axis_m) const { return axis_origin_y_mm + (axis_m - axis_top_m) * mm_per_m; }
-    /// The column's depths on paper: a DepthScale whose depth d lands at y_mm(d + offset).
-    DepthScale columnScale(std::size_t column) const {
-        return DepthScale(axis_top_m - columns[column].offset_m, mm_per_m, axis_origin_y_mm);
+    double y_mm(double axis_value) const {
+        return axis_origin_y_mm + (axis_value - axis_top_m) * mm_per_axis_unit;
     }
+    /// The column's depths on paper: depth d lands at y_mm(d + offset), or on an age axis at
+    /// y_mm(median age at d).
+    const DepthScale &columnScale(std::size_t column) const { return *columns.at(column).scale; }
     double columnY_mm(std::size_t column, double depth_m) const {
-        return y_mm(depth_m + columns[column].offset_m);
+        return columnScale(column).y_mm(depth_m);
     }
 };
 

@@ -35,9 +35,11 @@ struct PanelIsochron {
     std::vector<At> at;
 };
 
-/// The vertical axis: depth below each collar, or elevation relative to present sea level
-/// (each column shifted up by its collar elevation).
-enum class PanelAxis { Depth, Elevation };
+/// The vertical axis: depth below each collar, elevation relative to present sea level (each
+/// column shifted up by its collar elevation), or age: each column drawn through its hole's age
+/// model (the medians, HoleColumnInput::age_model), so equal ages stand level and the time a
+/// logged surface stands for opens as a gap in the column.
+enum class PanelAxis { Depth, Elevation, Age };
 
 struct PanelInput {
     std::string title;                    ///< project name for the title block
@@ -53,10 +55,13 @@ struct PanelView {
     /// columns without it keep the plain axis and are marked as not flattened.
     std::optional<std::string> flatten_on;
     double scale_ratio = 500.0; ///< vertical scale 1:N on paper
+    /// Age axis only: paper per million years. 0: the height a depth axis at scale_ratio would
+    /// give the deepest hole, shared over the span of the age models.
+    double age_mm_per_myr = 0.0;
     DepthUnit depth_unit = DepthUnit::Metres;
     double column_gap_mm = 25.0; ///< room between columns for tie lines
-    /// Window on the vertical axis (axis units: m below collar, m elevation, or m below the
-    /// flattening level); unset: everything.
+    /// Window on the vertical axis (axis units: m below collar, m elevation, m below the
+    /// flattening level, or Ma on an age axis); unset: everything.
     std::optional<double> window_top_m, window_base_m;
     bool legend = true;
     bool title_block = true;

@@ -15,6 +15,9 @@
 #include "draw/text_extent.hpp"
 
 #include <algorithm>
+#include <cstdio>
+#include <stdexcept>
+#include <string>
 
 namespace atollog::draw {
 
@@ -32,6 +35,32 @@ void addColumnNote(DisplayList &list, const HoleColumnInput &hole, const PanelCo
                   {ItemRole::ColumnNote, hole.hole}});
 }
 
+/// On an age axis the time a logged surface stands for opens as a gap in the column (the model's
+/// two rows at the surface's depth): a tinted band across the column's tracks says so, so the gap
+/// does not read as missing core.
+void addHiatusGaps(DisplayList &list, const HoleColumnInput &hole, const DepthScale &scale,
+                   const PanelColumnFrame &col, const HoleColumnView &window) {
+    const std::vector<ColumnAgeRow> &rows = hole.age_model.rows;
+    for (std::size_t i = 0; i + 1 < rows.size(); ++i) {
+        const double d = rows[i].depth_m;
+        if (rows[i + 1].depth_m != d || !(rows[i + 1].q500_ma > rows[i].q500_ma) ||
+            d < *window.window_top_m || d > *window.window_base_m) {
+            continue;
+        }
+        const double top = scale.yAbove_mm(d), bottom = scale.y_mm(d);
+        if (bottom - top <= 0.0) {
+            continue;
+        }
+        char key[32];
+        std::snprintf(key, sizeof key, "%.2f", d);
+        list.add(Rect{RectMm{col.x.runs_left_mm, top, col.x.right_mm - col.x.runs_left_mm, bottom - top},
+                      ps::kHiatusGap,
+                      FillPattern::None,
+                      std::nullopt,
+                      {ItemRole::Hiatus, hole.hole + " " + key}});
+    }
+}
+
 } // namespace
 
 DisplayList layoutPanel(const PanelInput &in, const PanelView &view, PanelGeometry *geometry) {
@@ -43,7 +72,8 @@ DisplayList layoutPanel(const PanelInput &in, const PanelView &view, PanelGeomet
                            f.axis_top_m <= 0.0 && f.axis_base_m >= 0.0;
 
     DisplayList list;
-    RectMm extent = appendPanelTitleBlock(list, in, view, {ps::kMargin_mm, f.title_top_mm});
+    RectMm extent = appendPanelTitleBlock(list, in, view, {ps::kMargin_mm, f.title_top_mm},
+                                          f.mm_per_axis_unit);
     // Underneath the columns: the axis with the sea-level line, then the bands, so that no
     // band or line across the panel ever hides a log.
     appendPanelVerticalAxis(list, f, view, columns_right);
@@ -75,8 +105,15 @@ DisplayList layoutPanel(const PanelInput &in, const PanelView &view, PanelGeomet
             appendHoleColumnHeader(list, hole, hv, style, col.x, body_top);
             header_top = body_top - col.header_height_mm;
             box = RectMm{col.x.left_mm, header_top, 0.0, col.header_height_mm};
-            addColumnNote(list, hole, col, header_top + col.header_height_mm + 4.0,
-                          "nothing in the window");
+            if (!col.no_age_model) {
+                addColumnNote(list, hole, col, header_top + col.header_height_mm + 4.0,
+                              "nothing in the window");
+            }
+        }
+        if (col.no_age_model) {
+            addColumnNote(list, hole, col, header_top, "no age model");
+        } else if (col.view && view.axis == PanelAxis::Age) {
+            addHiatusGaps(list, hole, f.columnScale(c), col, *col.view);
         }
         if (col.has_note) {
             addColumnNote(list, hole, col, header_top, "not flattened");
@@ -117,10 +154,11 @@ DisplayList layoutPanel(const PanelInput &in, const PanelView &view, PanelGeomet
         g.column_boxes = std::move(boxes);
         for (const PanelColumnFrame &col : f.columns) {
             g.column_offset_m.push_back(col.offset_m);
+            g.column_scales.push_back(col.scale);
             g.lithology_left_mm.push_back(col.x.lithology_left_mm);
             g.lithology_right_mm.push_back(col.x.lithology_right_mm);
         }
-        g.mm_per_m = f.mm_per_m;
+        g.mm_per_axis_unit = f.mm_per_axis_unit;
         g.axis_origin_y_mm = f.axis_origin_y_mm;
         g.axis_top_m = f.axis_top_m;
         g.axis_base_m = f.axis_base_m;
@@ -129,12 +167,25 @@ DisplayList layoutPanel(const PanelInput &in, const PanelView &view, PanelGeomet
     return list;
 }
 
+namespace {
+
+const DepthScale &scaleOf(const PanelGeometry &g, std::size_t column) {
+    const std::optional<DepthScale> &scale = g.column_scales.at(column);
+    if (!scale) {
+        throw std::out_of_range("column " + std::to_string(column + 1) +
+                                " has no place on this axis (no age model)");
+    }
+    return *scale;
+}
+
+} // namespace
+
 double panelY_mm(const PanelGeometry &g, std::size_t column, double depth_m) {
-    return g.axis_origin_y_mm + (depth_m + g.column_offset_m.at(column) - g.axis_top_m) * g.mm_per_m;
+    return scaleOf(g, column).y_mm(depth_m);
 }
 
 double panelDepth_m(const PanelGeometry &g, std::size_t column, double y_mm) {
-    return g.axis_top_m + (y_mm - g.axis_origin_y_mm) / g.mm_per_m - g.column_offset_m.at(column);
+    return scaleOf(g, column).depth_m(y_mm);
 }
 
 } // namespace atollog::draw

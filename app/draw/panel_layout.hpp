@@ -2,10 +2,12 @@
 // The correlation panel: hole columns side by side on one vertical axis (depth below collar,
 // elevation, or flattened on a tie or isochron), tie lines and isochrons joining them, a title
 // block and a legend of what is shown. A pure function of plain input: no Qt, no engine, no db.
+#include "draw/depth_scale.hpp"
 #include "draw/display_list.hpp"
 #include "draw/panel_input.hpp"
 
 #include <cstddef>
+#include <optional>
 #include <vector>
 
 namespace atollog::draw {
@@ -15,10 +17,14 @@ struct PanelGeometry {
     /// Per column: from its left edge (left of its depth labels) to its right edge, from the top
     /// of its header to the bottom of what it drew.
     std::vector<RectMm> column_boxes;
-    std::vector<double> column_offset_m; ///< per column: axis value = depth + offset
-    double mm_per_m = 0.0;
+    /// Per column on a depth or elevation axis: axis value = depth + offset (0 on an age axis).
+    std::vector<double> column_offset_m;
+    /// Per column: depth to paper y (through its age model on an age axis; unset for a hole
+    /// without one there).
+    std::vector<std::optional<DepthScale>> column_scales;
+    double mm_per_axis_unit = 0.0; ///< paper mm per axis unit (m, or Myr on an age axis)
     double axis_origin_y_mm = 0.0; ///< paper y of axis_top_m
-    double axis_top_m = 0.0;       ///< axis value at the top of the shown window
+    double axis_top_m = 0.0;       ///< axis value at the top of the shown window (m or Ma)
     double axis_base_m = 0.0;      ///< axis value at its base
     /// Per column: x of the lithology track's edges (where ties and isochrons end).
     std::vector<double> lithology_left_mm, lithology_right_mm;
@@ -33,7 +39,8 @@ DisplayList layoutPanel(const PanelInput &input, const PanelView &view,
                         PanelGeometry *geometry = nullptr);
 
 /// Convenience for the viewer: the paper y (mm) of a depth (m below the collar) in a column,
-/// and back. Throw std::out_of_range for a column the geometry does not have.
+/// and back. Throw std::out_of_range for a column the geometry does not have, or one with no
+/// place on the axis (an age axis and no age model).
 double panelY_mm(const PanelGeometry &geometry, std::size_t column, double depth_m);
 double panelDepth_m(const PanelGeometry &geometry, std::size_t column, double y_mm);
 

@@ -36,6 +36,8 @@ void addEdgeBar(DisplayList &out, const PanelFrame &f, const LinkLevel &l, doubl
 LinkResult appendLink(DisplayList &bands, DisplayList &lines,
                                           const PanelFrame &f, std::vector<LinkLevel> levels,
                                           const LinkLook &look, const std::string &key) {
+    // On an age axis a hole without an age model has no place to put a level.
+    std::erase_if(levels, [&f](const LinkLevel &l) { return !f.columns.at(l.column).scale; });
     if (levels.empty()) {
         return {};
     }

@@ -32,6 +32,10 @@ inline constexpr Colour kTieBand = Colour{0x00, 0x72, 0xB2, 56};
 inline constexpr Colour kIsochron = colourFromHex(0xD55E00);
 inline constexpr Colour kIsochronBand = Colour{0xD5, 0x5E, 0x00, 28};
 
+/// The gap an age axis opens at a logged surface (time not represented by rock): a pale grey,
+/// lighter than any fill, so it reads as empty rather than as a unit.
+inline constexpr Colour kHiatusGap = Colour{0x99, 0x99, 0x99, 60};
+
 inline constexpr Stroke kTieStroke{kTie, 0.35, DashStyle::Solid};
 inline constexpr Stroke kTieSkipStroke{kTie, 0.35, DashStyle::Dashed};
 inline constexpr Stroke kIsochronStroke{kIsochron, 0.55, DashStyle::Dotted};

@@ -24,9 +24,14 @@ std::string holesLine(const PanelInput &in) {
     return s;
 }
 
-std::string scaleLine(const PanelView &view) {
+std::string scaleLine(const PanelView &view, double mm_per_axis_unit) {
     char ratio[64];
-    std::snprintf(ratio, sizeof ratio, "vertical scale 1:%.0f", view.scale_ratio);
+    if (view.axis == PanelAxis::Age) {
+        // A ratio means nothing between paper and time: give paper per million years.
+        std::snprintf(ratio, sizeof ratio, "vertical scale %.3g mm per Myr", mm_per_axis_unit);
+    } else {
+        std::snprintf(ratio, sizeof ratio, "vertical scale 1:%.0f", view.scale_ratio);
+    }
     std::string s = std::string(ratio) + "  \u00b7  " + panelAxisTitle(view);
     if (view.flatten_on) {
         s += ", flattened on " + *view.flatten_on;
@@ -48,7 +53,7 @@ double panelTitleBlockHeight_mm(const PanelView &view) {
 }
 
 RectMm appendPanelTitleBlock(DisplayList &list, const PanelInput &in, const PanelView &view,
-                             PointMm top_left) {
+                             PointMm top_left, double mm_per_axis_unit) {
     if (!view.title_block) {
         return RectMm{top_left.x_mm, top_left.y_mm, 0, 0};
     }
@@ -65,7 +70,7 @@ RectMm appendPanelTitleBlock(DisplayList &list, const PanelInput &in, const Pane
     const std::string title = in.title.empty() ? "Correlation panel" : in.title;
     line(title, ps::kTitleSize_pt, FontWeight::Bold, {ItemRole::Title, title});
     line(holesLine(in), ps::kSubtitleSize_pt, FontWeight::Regular, {ItemRole::Subtitle, "holes"});
-    line(scaleLine(view), ps::kSubtitleSize_pt, FontWeight::Regular,
+    line(scaleLine(view, mm_per_axis_unit), ps::kSubtitleSize_pt, FontWeight::Regular,
          {ItemRole::Subtitle, "scale"});
     return RectMm{top_left.x_mm, top_left.y_mm, right - top_left.x_mm, y - top_left.y_mm};
 }

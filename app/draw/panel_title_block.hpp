@@ -11,8 +11,9 @@ double panelTitleBlockHeight_mm(const PanelView &view);
 
 /// Appends the block with its top-left corner at `top_left` (nothing when view.title_block is
 /// off); returns the box it covers. Roles: Title (key: the title), Subtitle (keys "holes",
-/// "scale").
+/// "scale"). `mm_per_axis_unit` is the panel's vertical scale as laid out: an age axis states it
+/// as mm per Myr, the others as the view's ratio.
 RectMm appendPanelTitleBlock(DisplayList &list, const PanelInput &input, const PanelView &view,
-                             PointMm top_left);
+                             PointMm top_left, double mm_per_axis_unit);
 
 } // namespace atollog::draw

@@ -27,6 +27,9 @@ std::string fixed(double v, int decimals) {
 } // namespace
 
 std::string panelAxisTitle(const PanelView &view) {
+    if (view.axis == PanelAxis::Age) {
+        return "age from the age models (Ma)";
+    }
     const std::string unit = depthUnitWord(view.depth_unit);
     if (view.flatten_on) {
         return "depth below " + *view.flatten_on + " (" + unit + ")";
@@ -39,7 +42,9 @@ std::string panelAxisTitle(const PanelView &view) {
 
 void appendPanelVerticalAxis(DisplayList &list, const PanelFrame &f, const PanelView &view,
                              double right_mm) {
-    const double unit_m = view.depth_unit == DepthUnit::Feet ? kMetresPerFoot : 1.0;
+    // Ages are in Ma whatever unit the depths are labelled in.
+    const double unit_m =
+        view.depth_unit == DepthUnit::Feet && view.axis != PanelAxis::Age ? kMetresPerFoot : 1.0;
     // Elevation labels are heights: the negated axis value.
     const double sign = view.axis == PanelAxis::Elevation && !view.flatten_on ? -1.0 : 1.0;
     const double x = f.axis_x_mm;
@@ -48,7 +53,7 @@ void appendPanelVerticalAxis(DisplayList &list, const PanelFrame &f, const Panel
                   {ItemRole::PanelAxis, "axis"}});
 
     const DepthTicks ticks = chooseDepthTicks(f.axis_top_m / unit_m, f.axis_base_m / unit_m,
-                                              f.mm_per_m * unit_m, kMinLabelSpacing_mm);
+                                              f.mm_per_axis_unit * unit_m, kMinLabelSpacing_mm);
     for (const double v : ticks.minor_m) {
         const double y = f.y_mm(v * unit_m);
         list.add(Line{{x - kMinorTick_mm, y}, {x, y}, Stroke{ps::kInk, 0.2, DashStyle::Solid},

@@ -18,7 +18,7 @@ double columnBodyTop_mm(const draw::PanelGeometry &geometry, std::size_t column)
 
 /// "depth 23.40 m", "elevation -3.10 m" or "1.20 m below <flattening item>", then, inside a
 /// column, "hole TOR1: 24.10 m below collar" on a second line. Empty without panel geometry
-/// (mm_per_m not positive).
+/// (mm_per_axis_unit not positive).
 QString axisReadout(const PanelScene &scene, const draw::PointMm &at);
 
 } // namespace atollog::view

@@ -67,3 +67,43 @@ TEST_CASE("Depth ticks follow the 1-2-5 series and keep labels apart", "[draw][g
     }
     CHECK_THROWS_AS(chooseDepthTicks(30.0, 20.0, 5.0, 10.0), std::invalid_argument);
 }
+
+TEST_CASE("A warped DepthScale interpolates between knots and opens a step", "[draw][geometry]") {
+    // Depth to axis value through knots (piecewise linear interpolation), then 10 mm per unit;
+    // the two knots at 10 m are a step from 1 to 3.
+    const DepthScale scale = DepthScale::warped(
+        {{0.0, 0.0}, {10.0, 1.0}, {10.0, 3.0}, {20.0, 4.0}}, 0.5, 10.0, 100.0);
+    CHECK(scale.isWarped());
+    CHECK_THAT(scale.y_mm(5.0), WithinAbs(100.0 + (0.5 - 0.5) * 10.0, 1e-9));
+    CHECK_THAT(scale.y_mm(15.0), WithinAbs(100.0 + (3.5 - 0.5) * 10.0, 1e-9));
+    // At the step: the deeper side for y_mm, the shallower side for yAbove_mm.
+    CHECK_THAT(scale.y_mm(10.0), WithinAbs(100.0 + 2.5 * 10.0, 1e-9));
+    CHECK_THAT(scale.yAbove_mm(10.0), WithinAbs(100.0 + 0.5 * 10.0, 1e-9));
+    // Off a step both sides agree.
+    CHECK(scale.yAbove_mm(12.5) == scale.y_mm(12.5));
+    // Beyond the end knots: the end values.
+    CHECK_THAT(scale.y_mm(-3.0), WithinAbs(100.0 - 0.5 * 10.0, 1e-9));
+    CHECK_THAT(scale.y_mm(25.0), WithinAbs(100.0 + 3.5 * 10.0, 1e-9));
+    // Back from y: inside the step it is the step's depth; elsewhere the inverse.
+    CHECK_THAT(scale.depth_m(scale.y_mm(7.5)), WithinAbs(7.5, 1e-9));
+    CHECK_THAT(scale.depth_m(scale.y_mm(17.5)), WithinAbs(17.5, 1e-9));
+    CHECK_THAT(scale.depth_m(100.0 + (2.0 - 0.5) * 10.0), WithinAbs(10.0, 1e-9));
+    // Tick spacing uses the mean paper per metre: 4 units x 10 mm over 20 m.
+    CHECK_THAT(scale.mm_per_m(), WithinAbs(2.0, 1e-12));
+}
+
+TEST_CASE("A warped DepthScale refuses knots it cannot use", "[draw][geometry][bad-input]") {
+    using V = std::vector<atollog::draw::AxisKnot>;
+    const double nan = std::numeric_limits<double>::quiet_NaN();
+    CHECK_THROWS_WITH(DepthScale::warped(V{{0.0, 0.0}}, 0.0, 1.0),
+                      Catch::Contains("at least two knots"));
+    CHECK_THROWS_WITH(DepthScale::warped(V{{0.0, 0.0}, {5.0, nan}}, 0.0, 1.0),
+                      Catch::Contains("knot 2 is not finite"));
+    CHECK_THROWS_WITH(DepthScale::warped(V{{0.0, 1.0}, {5.0, 0.5}}, 0.0, 1.0),
+                      Catch::Contains("must not decrease"));
+    CHECK_THROWS_WITH(DepthScale::warped(V{{5.0, 0.0}, {4.0, 1.0}}, 0.0, 1.0),
+                      Catch::Contains("must not decrease"));
+    CHECK_THROWS_WITH(DepthScale::warped(V{{5.0, 0.0}, {5.0, 1.0}}, 0.0, 1.0),
+                      Catch::Contains("span no depth"));
+    CHECK_THROWS_AS(DepthScale::warped(V{{0.0, 0.0}, {5.0, 1.0}}, 0.0, 0.0), std::invalid_argument);
+}

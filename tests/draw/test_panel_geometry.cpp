@@ -42,7 +42,7 @@ TEST_CASE("Panel depth maps to paper at 1:500 (1 m on 2 mm)", "[panel]") {
     PanelGeometry g;
     const DisplayList list = layoutPanel(samplePanel(), samplePanelView(), &g);
     // 1:500 puts 1000 mm of core on 2 mm of paper.
-    CHECK(g.mm_per_m == Approx(2.0).epsilon(1e-12));
+    CHECK(g.mm_per_axis_unit == Approx(2.0).epsilon(1e-12));
     // MRV-L1's 11.0-17.5 m grainstone: 6.5 m -> 13 mm, its top 11 m -> 22 mm below the collar.
     const Rect &box = onlyItem<Rect>(list, ItemRole::LithologyInterval, "11.00-17.50");
     CHECK(box.box.height_mm == Approx(13.0).margin(1e-9));
