@@ -15,6 +15,7 @@
 #include <cstdio>
 #include <fstream>
 #include <map>
+#include <mutex>
 #include <sstream>
 
 namespace atollog::db::detail {
@@ -109,6 +110,14 @@ void checkIntegrity(SQLite::Database& db, const std::filesystem::path& file) {
 
 } // namespace
 
+void configureSqliteProcess() {
+    static std::once_flag once;
+    std::call_once(once, [] {
+        // SQLITE_MISUSE when SQLite is already initialised: nothing to do then.
+        (void)sqlite3_config(SQLITE_CONFIG_MEMSTATUS, 0);
+    });
+}
+
 void hardenConnection(SQLite::Database& db) {
     // https://www.sqlite.org/c3ref/c_dbconfig_defensive.html and
     // https://www.sqlite.org/security.html ("Untrusted SQLite Database Files").
@@ -136,8 +145,11 @@ void configureProjectConnection(SQLite::Database& db, const std::filesystem::pat
 
 std::unique_ptr<SQLite::Database> openCheckedProject(const std::filesystem::path& file) {
     checkHeader(file);
+    configureSqliteProcess();
     try {
-        auto db = std::make_unique<SQLite::Database>(file, SQLite::OPEN_READWRITE);
+        // NOMUTEX: one thread at a time per connection (see ProjectStore::create).
+        auto db = std::make_unique<SQLite::Database>(file,
+                                                     SQLite::OPEN_READWRITE | SQLite::OPEN_NOMUTEX);
         hardenConnection(*db);
         // Until the file passes the checks, closing must not write it: the last connection to
         // close normally checkpoints the WAL into the database file, which would merge frames

@@ -8,6 +8,11 @@
 
 namespace atollog::db::detail {
 
+/// Process-wide SQLite settings, applied once before the first connection: memory statistics
+/// off (they take a global mutex on every allocation, and atollog never reads them). Harmless
+/// when SQLite was already started by someone else: the setting is then left as it was.
+void configureSqliteProcess();
+
 /// Settings every connection gets before it reads anything: triggers, views, untrusted schema
 /// functions and extension loading off; defensive mode on; busy timeout 5000 ms.
 void hardenConnection(SQLite::Database& db);

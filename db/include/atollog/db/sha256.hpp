@@ -1,7 +1,9 @@
 #pragma once
-// SHA-256 (FIPS 180-4) for input hashes in provenance records.
+// SHA-256 (FIPS 180-4) for input hashes in provenance records, computed by OpenSSL's libcrypto
+// (EVP interface), which uses the processor's SHA extensions where it has them.
 #include <array>
 #include <cstdint>
+#include <memory>
 #include <string>
 #include <string_view>
 
@@ -9,17 +11,18 @@ namespace atollog::db {
 
 class Sha256 {
   public:
-    Sha256();
+    Sha256(); ///< throws std::runtime_error when libcrypto cannot start a digest
+    ~Sha256();
+    Sha256(const Sha256&) = delete;
+    Sha256& operator=(const Sha256&) = delete;
+
     void update(std::string_view bytes);
     std::array<std::uint8_t, 32> digest(); ///< finishes; the object is then spent
     std::string hexDigest();
 
   private:
-    void block(const std::uint8_t* p);
-    std::array<std::uint32_t, 8> h_;
-    std::array<std::uint8_t, 64> buf_{};
-    std::size_t buf_len_ = 0;
-    std::uint64_t total_len_ = 0;
+    struct Context;
+    std::unique_ptr<Context> context_;
 };
 
 std::string sha256Hex(std::string_view bytes);
