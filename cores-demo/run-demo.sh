@@ -52,9 +52,14 @@ run line "$project" --hole OSS1 --with PEL1
 run line "$project" --hole OSS1 --with PEL1 --by segment
 run line "$project" --hole PEL1 --composite --by segment
 run isochrons "$project" "${model[@]}" --ages-ma 0.125,0.45,1.0 --events "B CONV-MIN"
-# The correlation panel: columns, tie lines and isochrons, as the viewer shows it.
+# The correlation panel: columns with lanes of three taxa whose events are tied, the larger
+# benthic foraminifera zones and an age track (dates, age model), tie lines and isochrons, as the
+# viewer shows it.
 run panel "$project" "${model[@]}" --out build/demo-panel.png --scale 1000 \
-    --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --ages-ma 0.125,1.0
+    --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --ages-ma 0.125,1.0 \
+    --taxa CONV-MIN,LEPT-TEN,OPKA-GRA \
+    --tracks runs,lithology,surfaces,samples,taxa,zones,dates,model \
+    --zone-scheme "VL larger benthic foraminifera"
 run panel "$project" "${model[@]}" --out build/demo-panel-flat.svg --scale 1000 \
     --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --axis elevation --flatten "T LEPT-TEN"
 run history "$project"

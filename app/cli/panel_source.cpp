@@ -1,5 +1,9 @@
 #include "cli/panel_source.hpp"
 
+#include "cli/panel_tracks.hpp"
+
+#include "atollog/engine/biostrat_run.hpp"
+#include "atollog/engine/date_ages.hpp"
 #include "atollog/engine/isochrons.hpp"
 #include "atollog/engine/logged_surfaces.hpp"
 
@@ -134,24 +138,36 @@ draw::PanelInput panelInputFromDataset(const CoreDataset& data, const PanelSourc
             in.ties.push_back(std::move(tie));
         }
     }
-    if (!o.ages_ma.empty()) {
-        std::vector<std::pair<std::size_t, AgeModel>> models;
+    for (draw::HoleColumnInput& c : in.columns) c.tracks = o.tracks;
+    if (!o.taxa.empty() || o.zones) {
+        const BiostratResult bio = runBiostratigraphy(data, o.model.biostrat.settings());
+        if (!o.taxa.empty())
+            addTaxonLanes(in.columns, data, bio.ranges, o.taxa, o.model.biostrat.settings());
+        if (o.zones) addZoneLanes(in.columns, data, bio.zones, o.zone_scheme);
+    }
+    if (o.dates) addDates(in.columns, computeDateAges(data, o.model.dates.settings()));
+    // Each hole's model once: for its isochrons and its age track.
+    std::vector<std::pair<std::size_t, AgeModel>> models;
+    if (!o.ages_ma.empty() || o.age_model) {
         for (const auto& hm : gatherAgeModelInputs(data, o.model, ""))
             if (const auto it = column_of.find(hm.hole); it != column_of.end())
                 models.emplace_back(it->second, buildHoleModel(hm, o.model));
-        for (double age : o.ages_ma) {
-            draw::PanelIsochron iso;
-            iso.label = ageLabel(age);
-            iso.age_ma = age;
-            for (const auto& [column, m] : models) {
-                const IsochronDepth d = isochronDepth(m, age);
-                if (d.depth_q025_m && d.depth_q500_m && d.depth_q975_m)
-                    iso.at.push_back({column, *d.depth_q025_m, *d.depth_q500_m, *d.depth_q975_m});
-            }
-            std::sort(iso.at.begin(), iso.at.end(),
-                      [](const auto& a, const auto& b) { return a.column < b.column; });
-            in.isochrons.push_back(std::move(iso));
+    }
+    if (o.age_model)
+        for (const auto& [column, m] : models) in.columns[column].age_model = columnAgeModel(m);
+    setCommonAgeRange(in.columns);
+    for (double age : o.ages_ma) {
+        draw::PanelIsochron iso;
+        iso.label = ageLabel(age);
+        iso.age_ma = age;
+        for (const auto& [column, m] : models) {
+            const IsochronDepth d = isochronDepth(m, age);
+            if (d.depth_q025_m && d.depth_q500_m && d.depth_q975_m)
+                iso.at.push_back({column, *d.depth_q025_m, *d.depth_q500_m, *d.depth_q975_m});
         }
+        std::sort(iso.at.begin(), iso.at.end(),
+                  [](const auto& a, const auto& b) { return a.column < b.column; });
+        in.isochrons.push_back(std::move(iso));
     }
     return in;
 }

@@ -21,11 +21,21 @@ struct PanelSourceOptions {
     std::vector<std::string> holes;
     std::vector<std::string> events;  ///< tie lines of these events (ids)
     std::vector<double> ages_ma;      ///< isochrons of these ages
-    AgeModelOptions model;            ///< for isochrons; its pick and date settings for ties
+    AgeModelOptions model;            ///< for isochrons and the age track; its pick and date
+                                      ///< settings for ties, taxa, zones and dates
     std::string title;
+    // The columns' data tracks: filled only when asked for, so a plain panel costs nothing more.
+    std::vector<std::string> taxa; ///< a lane per taxon id, in this order, in every column
+    bool zones = false;            ///< zones of zone_scheme (empty: every scheme)
+    std::string zone_scheme;
+    bool dates = false;     ///< dates in the age track
+    bool age_model = false; ///< each hole's age model in the age track
+    draw::HoleColumnTracks tracks; ///< what every column shows
 };
 
-/// Throws std::invalid_argument naming an unknown hole or event, as the commands do.
+/// Throws std::invalid_argument naming an unknown hole, event, taxon or zonation scheme, as the
+/// commands do. Each hole's age model is built once, for its isochrons and its age track; the
+/// age tracks of all columns share one age range (setCommonAgeRange).
 draw::PanelInput panelInputFromDataset(const CoreDataset& data, const PanelSourceOptions& options);
 
 /// One hole's column (clamping over-full runs to their cored length: core expansion is drawn as

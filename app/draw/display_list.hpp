@@ -61,6 +61,20 @@ enum class ItemRole {
     Isochron,     // the median depth joined column to column
     IsochronBand, // the 2.5-97.5 % depth range joined column to column
     IsochronLabel,
+    // Hole column, data tracks (keys: the taxon id; the zone name; the date id; "median" or
+    // "band" for the age model; the tick value as labelled for the age scale).
+    ColumnTaxonName,     // the taxon's name rotated over its lane
+    ColumnTaxonBar,      // shallowest to deepest counted in-place find
+    ColumnTaxonFind,     // a counted in-place find
+    ColumnTaxonExcluded, // a reworked or caved find, hollow, never part of the bar
+    ColumnZone,          // a zone's box, and its edge lines
+    ColumnZoneBracket,   // the uncertain part of a zone boundary: its box and hatch
+    ColumnZoneName,
+    ColumnZoneScheme, // the scheme's heading over its lane (key: the scheme)
+    ColumnAgeScale,   // the age track's frame, ticks, grid lines and labels
+    ColumnAgeModel,   // the age model's median line ("median") or 95 % band ("band")
+    ColumnDateMarker,
+    ColumnDateBar, // a date's age range (horizontal) and depth bracket (vertical)
 };
 
 /// The role and the identifier of the datum an item draws (taxon id, event id, sample id).

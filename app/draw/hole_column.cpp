@@ -1,9 +1,15 @@
 #include "draw/hole_column.hpp"
 
 #include "draw/depth_ticks.hpp"
+#include "draw/hole_column_ages.hpp"
+#include "draw/hole_column_data_tracks.hpp"
 #include "draw/hole_column_header.hpp"
 #include "draw/hole_column_symbols.hpp"
+#include "draw/hole_column_taxa.hpp"
+#include "draw/hole_column_track_validation.hpp"
 #include "draw/hole_column_validation.hpp"
+#include "draw/hole_column_window.hpp"
+#include "draw/hole_column_zones.hpp"
 #include "draw/lithology_fill.hpp"
 #include "draw/lithology_width.hpp"
 #include "draw/lithology_words.hpp"
@@ -35,34 +41,6 @@ std::string fixed(double v, int decimals) {
 
 std::string intervalKey(const ColumnInterval &iv) {
     return fixed(iv.top_m, 2) + "-" + fixed(iv.base_m, 2);
-}
-
-/// The depths (m) a column shows: the view's window, its unset ends the collar and the drilled
-/// base.
-struct DepthWindow {
-    double top_m;
-    double base_m;
-
-    bool meets(double top, double base) const { return top <= base_m && base >= top_m; }
-    bool contains(double d) const { return d >= top_m && d <= base_m; }
-};
-
-DepthWindow windowOf(const HoleColumnInput &in, const HoleColumnView &view) {
-    return {view.window_top_m.value_or(0.0), view.window_base_m.value_or(in.drilled_base_m)};
-}
-
-/// A box spanning top..base (m) in x0..x0+width, cut at the window; nothing when it has no
-/// height left.
-std::optional<RectMm> boxInWindow(const DepthScale &scale, const DepthWindow &w, double top_m,
-                                  double base_m, double x0_mm, double width_mm) {
-    const double top = std::max(top_m, w.top_m);
-    const double base = std::min(base_m, w.base_m);
-    if (base <= top) {
-        return std::nullopt;
-    }
-    // The base is drawn on the shallower side of a step of a warped scale (age axis), so a unit
-    // resting on a surface ends where the time gap under it opens.
-    return RectMm{x0_mm, scale.y_mm(top), width_mm, scale.yAbove_mm(base) - scale.y_mm(top)};
 }
 
 void addDepthAxis(DisplayList &list, const HoleColumnView &view, const HoleColumnStyle &s,
@@ -222,8 +200,11 @@ void addDrilledBase(DisplayList &list, const HoleColumnInput &in, const HoleColu
 
 } // namespace
 
-HoleColumnTrackPositions holeColumnTrackPositions(const HoleColumnTracks &t,
-                                                  const HoleColumnStyle &s, double left_mm) {
+namespace {
+
+HoleColumnTrackPositions trackPositions(const HoleColumnTracks &t, std::size_t taxon_lanes,
+                                        std::size_t zone_lanes, bool ages,
+                                        const HoleColumnStyle &s, double left_mm) {
     HoleColumnTrackPositions x;
     x.left_mm = left_mm;
     x.axis_x_mm = left_mm + (t.depth_axis ? s.depth_axis_width_mm : 0.0);
@@ -238,17 +219,31 @@ HoleColumnTrackPositions holeColumnTrackPositions(const HoleColumnTracks &t,
     track(t.lithology || t.surfaces, s.lithology_track_width_mm, x.lithology_left_mm,
           x.lithology_right_mm);
     track(t.samples, s.sample_track_width_mm, x.samples_left_mm, x.samples_right_mm);
+    track(taxon_lanes > 0, s.taxon_lane_width_mm * static_cast<double>(taxon_lanes),
+          x.taxa_left_mm, x.taxa_right_mm);
+    track(zone_lanes > 0, s.zone_lane_width_mm * static_cast<double>(zone_lanes), x.zones_left_mm,
+          x.zones_right_mm);
+    track(ages, s.age_track_width_mm, x.ages_left_mm, x.ages_right_mm);
     x.right_mm = std::max(at - s.track_gap_mm, x.axis_x_mm);
     return x;
+}
+
+} // namespace
+
+HoleColumnTrackPositions holeColumnTrackPositions(const HoleColumnInput &in,
+                                                  const HoleColumnStyle &s, double left_mm) {
+    return trackPositions(in.tracks, shownTaxonLanes(in), shownZoneSchemes(in).size(),
+                          ageTrackShown(in), s, left_mm);
 }
 
 HoleColumnPlacement appendHoleColumn(DisplayList &list, const HoleColumnInput &in,
                                      const DepthScale &scale, double left_mm,
                                      const HoleColumnView &view, const HoleColumnStyle &s) {
     validateHoleColumnInput(in, view);
+    validateHoleColumnDataTracks(in);
     const std::size_t first_item = list.size();
-    const DepthWindow w = windowOf(in, view);
-    const HoleColumnTrackPositions x = holeColumnTrackPositions(in.tracks, s, left_mm);
+    const DepthWindow w = depthWindowOf(in, view);
+    const HoleColumnTrackPositions x = holeColumnTrackPositions(in, s, left_mm);
     HoleColumnPlacement placed;
 
     appendHoleColumnHeader(list, in, view, s, x, scale.y_mm(w.top_m));
@@ -267,6 +262,9 @@ HoleColumnPlacement appendHoleColumn(DisplayList &list, const HoleColumnInput &i
     if (in.tracks.samples) {
         addSamples(list, in, scale, w, x, placed.legend);
     }
+    appendTaxonLanes(list, in, s, scale, w, x, placed.legend);
+    appendZoneLanes(list, in, s, scale, w, x, placed.legend);
+    appendAgeTrack(list, in, scale, w, x, placed.legend);
     addDrilledBase(list, in, view, s, scale, w, x);
 
     RectMm box = itemBounds(list.items()[first_item]);
@@ -280,7 +278,7 @@ HoleColumnPlacement appendHoleColumn(DisplayList &list, const HoleColumnInput &i
 DepthScale holeColumnDepthScale(const HoleColumnInput &in, const HoleColumnView &view,
                                 const HoleColumnStyle &s) {
     validateHoleColumnInput(in, view);
-    return DepthScale::fromRatio(windowOf(in, view).top_m, view.scale_ratio,
+    return DepthScale::fromRatio(depthWindowOf(in, view).top_m, view.scale_ratio,
                                  s.margin_mm + holeColumnHeaderHeight_mm(in, view, s));
 }
 

@@ -10,8 +10,10 @@
 namespace atollog::draw {
 
 /// Left and right edges (scene mm) of a column's tracks, left to right: depth axis (labels left
-/// of the axis line), core runs, lithology (also the room surfaces are drawn across), samples.
-/// A hidden track has zero width and no gap.
+/// of the axis line), core runs, lithology (also the room surfaces are drawn across), samples,
+/// then the data tracks: one lane per chosen taxon, one lane per zonation scheme, the age track
+/// (dates and the age model on an age axis). A hidden track, or a data track without data, has
+/// zero width and no gap.
 struct HoleColumnTrackPositions {
     double left_mm = 0;   // the column's left edge (left of the depth labels)
     double axis_x_mm = 0; // the depth axis line
@@ -21,10 +23,18 @@ struct HoleColumnTrackPositions {
     double lithology_right_mm = 0;
     double samples_left_mm = 0;
     double samples_right_mm = 0;
+    double taxa_left_mm = 0; // lanes of HoleColumnStyle::taxon_lane_width_mm, in input order
+    double taxa_right_mm = 0;
+    double zones_left_mm = 0; // lanes of HoleColumnStyle::zone_lane_width_mm, one per scheme
+    double zones_right_mm = 0;
+    double ages_left_mm = 0;
+    double ages_right_mm = 0;
     double right_mm = 0; // the column's right edge
 };
 
-HoleColumnTrackPositions holeColumnTrackPositions(const HoleColumnTracks &tracks,
+/// The positions of every track of this column at left_mm. The data tracks' widths follow the
+/// input (how many taxa, which schemes, whether there is a model or a date to show).
+HoleColumnTrackPositions holeColumnTrackPositions(const HoleColumnInput &input,
                                                   const HoleColumnStyle &style, double left_mm);
 
 /// Height of the header (hole id, collar and drilled depth, rotated track headings and the

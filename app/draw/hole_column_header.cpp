@@ -1,6 +1,9 @@
 #include "draw/hole_column_header.hpp"
 
+#include "draw/hole_column_ages.hpp"
+#include "draw/hole_column_data_tracks.hpp"
 #include "draw/hole_column_symbols.hpp"
+#include "draw/hole_column_taxa.hpp"
 #include "draw/lithology_width.hpp"
 #include "draw/text_extent.hpp"
 
@@ -76,6 +79,32 @@ std::vector<Heading> headings(const HoleColumnInput &in, const HoleColumnView &v
                        s.label_size_pt,
                        {ItemRole::SampleTick, "heading"}});
     }
+    if (shownTaxonLanes(in) > 0) {
+        for (std::size_t lane = 0; lane < in.taxa.size(); ++lane) {
+            const ColumnTaxonRange &taxon = in.taxa[lane];
+            out.push_back({taxonLaneCentre_mm(x, s, lane),
+                           taxon.name.empty() ? taxon.taxon : taxon.name,
+                           s.track_label_size_pt,
+                           {ItemRole::ColumnTaxonName, taxon.taxon}});
+        }
+    }
+    const std::vector<std::string> schemes = shownZoneSchemes(in);
+    for (std::size_t lane = 0; lane < schemes.size(); ++lane) {
+        out.push_back({x.zones_left_mm + s.zone_lane_width_mm * (static_cast<double>(lane) + 0.5),
+                       schemes[lane],
+                       s.track_label_size_pt,
+                       {ItemRole::ColumnZoneScheme, schemes[lane]}});
+    }
+    // The age scale: rotated labels standing on ticks, as the texture scale's.
+    if (const auto age = ageTrackScale(in, x)) {
+        for (std::size_t i = 0; i < age->ticks_ma.size(); ++i) {
+            const std::string label = age->tickLabel(i);
+            out.push_back({age->x_mm(age->ticks_ma[i]),
+                           label,
+                           s.track_label_size_pt,
+                           {ItemRole::ColumnAgeScale, label}});
+        }
+    }
     return out;
 }
 
@@ -102,7 +131,7 @@ std::string depthText(double depth_m, DepthUnit unit, int decimals) {
 
 double holeColumnHeaderHeight_mm(const HoleColumnInput &in, const HoleColumnView &view,
                                  const HoleColumnStyle &s) {
-    const HoleColumnTrackPositions x = holeColumnTrackPositions(in.tracks, s, 0.0);
+    const HoleColumnTrackPositions x = holeColumnTrackPositions(in, s, 0.0);
     return textLineHeight_mm(s.title_size_pt) + kTitleGap_mm +
            textLineHeight_mm(s.subtitle_size_pt) + kHeadingGap_mm +
            tallestHeading_mm(headings(in, view, s, x)) + kNameToBody_mm;
@@ -138,7 +167,8 @@ void appendHoleColumnHeader(DisplayList &list, const HoleColumnInput &in,
                   {ItemRole::Subtitle, in.hole}});
 
     for (const Heading &h : headings(in, view, s, x)) {
-        const bool scale_entry = h.tag.role == ItemRole::TextureScale;
+        const bool scale_entry =
+            h.tag.role == ItemRole::TextureScale || h.tag.role == ItemRole::ColumnAgeScale;
         // Texture names stand on their tick; other headings straight on the body.
         const double foot = body_top_mm - kNameToBody_mm;
         list.add(Text{{h.x_mm, foot},

@@ -2,6 +2,7 @@
 
 #include <optional>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace atollog::draw {
@@ -79,13 +80,64 @@ struct ColumnAgeModel {
     std::vector<ColumnAgeRow> rows;
 };
 
-/// Which tracks the column shows; a hidden track takes no room.
+/// A chosen taxon in the hole: one narrow lane, a bar from the shallowest to the deepest counted
+/// in-place find. Reworked and caved finds are drawn apart (hollow) and never extend the bar: a
+/// reworked fossil is older than its rock, a caved one younger. A taxon with no find here keeps
+/// its (empty) lane, so the lanes of every column line up.
+struct ColumnTaxonRange {
+    std::string taxon; // id; the key of its items
+    std::string name;  // header text; the id when empty
+    std::string group; // taxon-group word (coral, benthic_foram, ...): the bar's colour
+    std::vector<double> finds_m;    // counted in-place finds (sample levels), any order
+    std::vector<double> reworked_m; // excluded from the bar
+    std::vector<double> caved_m;    // excluded from the bar
+};
+
+/// One boundary of a zone in the hole: the bracket its defining event is picked in, or, when
+/// the event is not picked here (or the zone has no event on that side), an open edge at
+/// `shallow_m` == `deep_m`: the depth the caller lets the box reach (e.g. the next picked
+/// boundary, or the end of the hole), drawn without a closing line.
+struct ColumnZoneEdge {
+    double shallow_m = 0.0;
+    double deep_m = 0.0;
+    bool open = false;
+};
+
+/// A zone in the hole: a box from its top boundary to its base boundary, the brackets of the
+/// boundaries drawn as uncertain.
+struct ColumnZone {
+    std::string scheme; // one lane per scheme, in order of first appearance
+    std::string zone;   // the key of its items
+    ColumnZoneEdge top;
+    ColumnZoneEdge base;
+};
+
+/// A numerical date at its depth bracket, with its age and 95 % range (2.5-97.5 %, or the
+/// 2-sigma range of a normal), all in Ma.
+struct ColumnDate {
+    std::string id;     // key of its items, e.g. "u-th KAL1-012"
+    std::string method; // method word, e.g. "u-th"
+    double shallow_m = 0.0;
+    double deep_m = 0.0;
+    double age_ma = 0.0;
+    double age_low_ma = 0.0;  // younger end of the 95 % range
+    double age_high_ma = 0.0; // older end
+    bool used_in_model = true; // false: shown, not used by the age model (drawn hollow)
+};
+
+/// Which tracks the column shows; a hidden track takes no room. The tracks that draw data
+/// (taxa, zones, the age track of dates and the age model) take no room either when the column
+/// has no such data.
 struct HoleColumnTracks {
     bool depth_axis = true;
     bool core_runs = true;
     bool lithology = true;
     bool surfaces = true; // drawn over the lithology track (or alone, when it is hidden)
     bool samples = true;
+    bool taxa = true;      // one lane per ColumnTaxonRange
+    bool zones = true;     // one lane per zonation scheme
+    bool dates = true;     // in the age track
+    bool age_model = true; // in the age track: median line and 95 % band
 };
 
 /// One hole as plain values (no engine or db types): the CLI and the viewer fill it from a
@@ -98,6 +150,12 @@ struct HoleColumnInput {
     std::vector<ColumnInterval> intervals; // any order; they must not overlap
     std::vector<ColumnSample> samples;
     ColumnAgeModel age_model;
+    std::vector<ColumnTaxonRange> taxa; // lanes left to right, in this order
+    std::vector<ColumnZone> zones;
+    std::vector<ColumnDate> dates;
+    /// The age track's x range (Ma, younger first). A panel gives every column the same one so
+    /// their curves compare; unset: the span of this column's own model and dates.
+    std::optional<std::pair<double, double>> age_track_range_ma;
     HoleColumnTracks tracks;
 };
 

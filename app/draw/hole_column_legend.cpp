@@ -1,5 +1,6 @@
 #include "draw/hole_column_legend.hpp"
 
+#include "draw/hole_column_data_legend.hpp"
 #include "draw/hole_column_symbols.hpp"
 #include "draw/legend_rows.hpp"
 #include "draw/lithology_fill.hpp"
@@ -59,6 +60,12 @@ void HoleColumnLegendContent::addSurface(SurfaceKind s) {
     }
 }
 
+void HoleColumnLegendContent::addTaxonGroup(const std::string &group_word) {
+    if (std::find(taxon_groups.begin(), taxon_groups.end(), group_word) == taxon_groups.end()) {
+        taxon_groups.push_back(group_word);
+    }
+}
+
 void HoleColumnLegendContent::merge(const HoleColumnLegendContent &o) {
     for (const DrawnFill &f : o.fills) {
         addFill(f);
@@ -66,9 +73,22 @@ void HoleColumnLegendContent::merge(const HoleColumnLegendContent &o) {
     for (const SurfaceKind s : o.surfaces) {
         addSurface(s);
     }
+    for (const std::string &g : o.taxon_groups) {
+        addTaxonGroup(g);
+    }
     recovered = recovered || o.recovered;
     unrecovered = unrecovered || o.unrecovered;
     samples = samples || o.samples;
+    taxon_reworked = taxon_reworked || o.taxon_reworked;
+    taxon_caved = taxon_caved || o.taxon_caved;
+    zone = zone || o.zone;
+    zone_bracket = zone_bracket || o.zone_bracket;
+    zone_open = zone_open || o.zone_open;
+    zone_overlap = zone_overlap || o.zone_overlap;
+    age_median = age_median || o.age_median;
+    age_band = age_band || o.age_band;
+    date_used = date_used || o.date_used;
+    date_unused = date_unused || o.date_unused;
 }
 
 RectMm appendHoleColumnLegend(DisplayList &list, const HoleColumnLegendContent &c, PointMm top_left,
@@ -131,6 +151,7 @@ RectMm appendHoleColumnLegend(DisplayList &list, const HoleColumnLegendContent &
                           swatchTag("sample")});
         });
     }
+    appendDataTrackLegend(w, c);
     return w.box(top_left);
 }
 

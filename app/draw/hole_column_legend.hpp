@@ -4,6 +4,7 @@
 #include "draw/hole_column_input.hpp"
 #include "draw/hole_column_style.hpp"
 
+#include <string>
 #include <vector>
 
 namespace atollog::draw {
@@ -23,9 +24,21 @@ struct HoleColumnLegendContent {
     bool recovered = false;
     bool unrecovered = false;
     bool samples = false;
+    std::vector<std::string> taxon_groups; // group words of the taxon bars and finds drawn
+    bool taxon_reworked = false;
+    bool taxon_caved = false;
+    bool zone = false;
+    bool zone_bracket = false; // the uncertain part of a boundary
+    bool zone_open = false;    // an edge whose event is not picked here
+    bool zone_overlap = false; // zones side by side: their picks disagree in the hole
+    bool age_median = false;
+    bool age_band = false;
+    bool date_used = false;
+    bool date_unused = false;
 
     void addFill(DrawnFill f);
     void addSurface(SurfaceKind s);
+    void addTaxonGroup(const std::string &group_word);
     /// Merges another column's content (a correlation panel shares one legend).
     void merge(const HoleColumnLegendContent &other);
 };

@@ -14,6 +14,11 @@ struct HoleColumnStyle {
     double run_track_width_mm = 4.0;
     double lithology_track_width_mm = 30.0;
     double sample_track_width_mm = 4.0;
+    double taxon_lane_width_mm = 4.0; // per chosen taxon: bar, finds, and excluded finds aside
+    double zone_lane_width_mm = 6.0;  // per zonation scheme; room for a 4-character zone name
+    double age_track_width_mm = 26.0;
+    double track_label_size_pt = 6.0; // taxon, scheme and age-scale names over their tracks
+    double zone_label_size_pt = 5.5;
     double track_gap_mm = 1.5;
     double major_tick_min_spacing_mm = 10.0; // depth labels never closer than this
     double legend_gap_mm = 8.0;

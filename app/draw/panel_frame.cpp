@@ -183,7 +183,7 @@ PanelFrame placePanel(const PanelInput &in, const PanelView &view, double title_
     for (std::size_t c = 0; c < in.columns.size(); ++c) {
         PanelColumnFrame &col = f.columns[c];
         const HoleColumnInput &hole = in.columns[c];
-        col.x = holeColumnTrackPositions(hole.tracks, style, left);
+        col.x = holeColumnTrackPositions(hole, style, left);
         left = col.x.right_mm + view.column_gap_mm;
 
         HoleColumnView hv;

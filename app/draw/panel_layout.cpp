@@ -157,6 +157,7 @@ DisplayList layoutPanel(const PanelInput &in, const PanelView &view, PanelGeomet
             g.column_scales.push_back(col.scale);
             g.lithology_left_mm.push_back(col.x.lithology_left_mm);
             g.lithology_right_mm.push_back(col.x.lithology_right_mm);
+            g.link_out_mm.push_back(col.x.right_mm);
         }
         g.mm_per_axis_unit = f.mm_per_axis_unit;
         g.axis_origin_y_mm = f.axis_origin_y_mm;

@@ -26,8 +26,9 @@ struct PanelGeometry {
     double axis_origin_y_mm = 0.0; ///< paper y of axis_top_m
     double axis_top_m = 0.0;       ///< axis value at the top of the shown window (m or Ma)
     double axis_base_m = 0.0;      ///< axis value at its base
-    /// Per column: x of the lithology track's edges (where ties and isochrons end).
-    std::vector<double> lithology_left_mm, lithology_right_mm;
+    /// Per column: x of the lithology track's edges; ties and isochrons come into a column at
+    /// its lithology_left_mm and leave it at link_out_mm (its right edge, past its data tracks).
+    std::vector<double> lithology_left_mm, lithology_right_mm, link_out_mm;
 };
 
 /// Lays out the panel. Columns stand left to right with view.column_gap_mm between their edges;

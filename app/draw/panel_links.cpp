@@ -53,7 +53,10 @@ LinkResult appendLink(DisplayList &bands, DisplayList &lines,
         const LinkLevel &b = levels[i + 1];
         const bool skip = b.column > a.column + 1;
         skips = skips || skip;
-        const double xa = f.columns[a.column].x.lithology_right_mm;
+        // Out of a column at its right edge, past its samples, taxa, zones and ages, so a link
+        // never crosses a column's data; into the next at its lithology (past its depth axis and
+        // core runs, which are narrow and sit left of the rock).
+        const double xa = f.columns[a.column].x.right_mm;
         const double xb = f.columns[b.column].x.lithology_left_mm;
         const std::vector<PointMm> band{{xa, f.columnY_mm(a.column, a.shallow_m)},
                                         {xb, f.columnY_mm(b.column, b.shallow_m)},
@@ -71,7 +74,7 @@ LinkResult appendLink(DisplayList &bands, DisplayList &lines,
     }
 
     const LinkLevel &last = levels.back();
-    const double x_end = f.columns[last.column].x.lithology_right_mm;
+    const double x_end = f.columns[last.column].x.right_mm;
     const double y_end = f.columnY_mm(last.column, last.level_m);
     if (levels.size() == 1) {
         addEdgeBar(lines, f, last, x_end + look.edge_inset_mm, strip, look, line_tag);
@@ -80,7 +83,8 @@ LinkResult appendLink(DisplayList &bands, DisplayList &lines,
     if (y_end < strip.top_mm || y_end > strip.bottom_mm) {
         return {std::nullopt, skips};
     }
-    return {PointMm{f.columns[last.column].x.right_mm, y_end}, skips};
+    // A level seen in one hole ends in its stub right of the column: the label goes after it.
+    return {PointMm{x_end + (levels.size() == 1 ? kStub_mm : 0.0), y_end}, skips};
 }
 
 } // namespace atollog::draw

@@ -8,6 +8,7 @@
 #include "view/side_pane.hpp"
 
 #include <QActionGroup>
+#include <QCheckBox>
 #include <QApplication>
 #include <QCloseEvent>
 #include <QComboBox>
@@ -26,6 +27,7 @@
 
 #include <algorithm>
 #include <exception>
+#include <set>
 
 namespace atollog::view {
 
@@ -34,6 +36,10 @@ namespace {
 constexpr const char *kGeometryKey = "window/geometry";
 constexpr const char *kStateKey = "window/state";
 constexpr const char *kLastProjectKey = "project/last";
+constexpr const char *kTracksKey = "panel/tracks"; // the ticked track words, as --tracks lists them
+
+const char *const kTrackWords[] = {"runs", "lithology", "surfaces", "samples",
+                                   "taxa", "zones",     "dates",    "model"};
 
 /// Drafting scales offered; 1:500 is the panel's own default (PanelView).
 constexpr int kScales[] = {100, 200, 500, 1000, 2000, 5000};
@@ -76,6 +82,14 @@ MainWindow::MainWindow(QWidget *parent) : QMainWindow(parent) {
         refreshFlattenChoices();
         relayout();
     });
+    // Track choices persist between sessions; unset: every track shown.
+    const QVariant saved = QSettings().value(kTracksKey);
+    if (saved.isValid()) {
+        const QStringList words = saved.toStringList();
+        for (const char *word : kTrackWords) {
+            side_->trackBox(QLatin1String(word))->setChecked(words.contains(QLatin1String(word)));
+        }
+    }
     connect(canvas_, &PanelCanvas::itemSelected, this, &MainWindow::onItemSelected);
     connect(canvas_, &PanelCanvas::columnOrderChanged, this, &MainWindow::onColumnOrderChanged);
     connect(canvas_, &PanelCanvas::cursorReadout, readout_, &QLabel::setText);
@@ -92,14 +106,23 @@ void MainWindow::buildToolBar() {
     auto *axes = new QActionGroup(this);
     depth_ = new QAction(tr("&Depth axis"), axes);
     elevation_ = new QAction(tr("&Elevation axis"), axes);
+    age_ = new QAction(tr("&Age axis"), axes);
     depth_->setCheckable(true);
     elevation_->setCheckable(true);
+    age_->setCheckable(true);
     depth_->setChecked(true);
     depth_->setToolTip(tr("Depth below each collar"));
     elevation_->setToolTip(tr("Elevation relative to present sea level"));
-    connect(axes, &QActionGroup::triggered, this, [this] { relayout(); });
+    age_->setToolTip(tr("Age: each hole drawn through its age model, so equal ages stand level "
+                        "and the time of a surface opens as a grey gap"));
+    connect(axes, &QActionGroup::triggered, this, [this] {
+        // An age axis already stands every isochron level: nothing to flatten on.
+        flatten_->setEnabled(!age_->isChecked());
+        relayout();
+    });
     bar->addAction(depth_);
     bar->addAction(elevation_);
+    bar->addAction(age_);
     bar->addSeparator();
 
     bar->addWidget(new QLabel(tr(" Flatten on: "), bar));
@@ -154,6 +177,7 @@ void MainWindow::buildMenus() {
     view->addSeparator();
     view->addAction(depth_);
     view->addAction(elevation_);
+    view->addAction(age_);
     view->addSeparator();
 }
 
@@ -215,8 +239,20 @@ void MainWindow::refreshFlattenChoices() {
 void MainWindow::relayout() {
     try {
         shown_ = choosePanelContent(full_, side_->choice());
-        view_.axis = elevation_->isChecked() ? draw::PanelAxis::Elevation : draw::PanelAxis::Depth;
-        const QString flatten = flatten_->currentData().toString();
+        // The tracks ticked, and only the chosen taxa's lanes.
+        const draw::HoleColumnTracks tracks = side_->tracks();
+        const std::set<std::string> taxa = side_->shownTaxa();
+        for (draw::HoleColumnInput &column : shown_.columns) {
+            column.tracks = tracks;
+            std::erase_if(column.taxa, [&](const draw::ColumnTaxonRange &t) {
+                return taxa.count(t.taxon) == 0;
+            });
+        }
+        view_.axis = elevation_->isChecked() ? draw::PanelAxis::Elevation
+                     : age_->isChecked()     ? draw::PanelAxis::Age
+                                             : draw::PanelAxis::Depth;
+        const QString flatten =
+            view_.axis == draw::PanelAxis::Age ? QString() : flatten_->currentData().toString();
         view_.flatten_on =
             flatten.isEmpty() ? std::nullopt : std::optional<std::string>(flatten.toStdString());
         view_.scale_ratio = scale_->currentData().toInt();
@@ -230,6 +266,7 @@ void MainWindow::relayout() {
         }
         scene.axis = view_.axis;
         scene.flatten_on = view_.flatten_on;
+        scene.input = shown_;
         canvas_->setScene(std::move(scene));
     } catch (...) {
         canvas_->setScene(PanelScene{});
@@ -322,6 +359,13 @@ void MainWindow::closeEvent(QCloseEvent *event) {
     QSettings settings;
     settings.setValue(kGeometryKey, saveGeometry());
     settings.setValue(kStateKey, saveState());
+    QStringList tracks;
+    for (const char *word : kTrackWords) {
+        if (side_->trackBox(QLatin1String(word))->isChecked()) {
+            tracks << QLatin1String(word);
+        }
+    }
+    settings.setValue(kTracksKey, tracks);
     QMainWindow::closeEvent(event);
 }
 

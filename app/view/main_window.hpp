@@ -39,7 +39,9 @@ class MainWindow : public QMainWindow {
     SidePane *sidePane() const { return side_; }
     QComboBox *flattenCombo() const { return flatten_; }
     QComboBox *scaleCombo() const { return scale_; }
+    QAction *depthAction() const { return depth_; }
     QAction *elevationAction() const { return elevation_; }
+    QAction *ageAction() const { return age_; }
     const draw::PanelInput &shownInput() const { return shown_; }
     const draw::PanelView &panelView() const { return view_; }
 
@@ -63,6 +65,7 @@ class MainWindow : public QMainWindow {
     QComboBox *scale_ = nullptr;
     QAction *depth_ = nullptr;
     QAction *elevation_ = nullptr;
+    QAction *age_ = nullptr;
     QLabel *readout_ = nullptr;
     MessageSink sink_;
 

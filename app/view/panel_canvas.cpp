@@ -99,7 +99,16 @@ std::optional<std::size_t> PanelCanvas::headerAt(const QPointF &widget_px) const
 QString PanelCanvas::toolTipAt(const QPointF &widget_px) const {
     QStringList lines;
     if (const auto hit = itemAt(widget_px)) {
-        lines << describeItem(draw::itemTag(scene_.list.items()[*hit]));
+        const draw::ItemTag &tag = draw::itemTag(scene_.list.items()[*hit]);
+        // A data-track item in words with its data in the column under the cursor.
+        const draw::PointMm at = transform_.toScene(widget_px);
+        const auto column = columnAt(scene_, at);
+        std::optional<double> depth;
+        if (column && *column < scene_.geometry.column_offset_m.size()) {
+            depth = draw::panelDepth_m(scene_.geometry, *column, at.y_mm);
+        }
+        const QString track = describeTrackItem(scene_.input, tag, column, depth);
+        lines << (track.isEmpty() ? describeItem(tag) : track);
     }
     const QString readout = axisReadout(scene_, transform_.toScene(widget_px));
     if (!readout.isEmpty()) {

@@ -18,6 +18,7 @@ struct PanelScene {
     std::vector<std::string> holes; ///< hole id per column, as geometry.column_boxes
     draw::PanelAxis axis = draw::PanelAxis::Depth;
     std::optional<std::string> flatten_on;
+    draw::PanelInput input; ///< what was laid out: the data-track tooltips read it
 };
 
 } // namespace atollog::view

@@ -78,6 +78,14 @@ ProjectPanel loadProjectPanel(const std::filesystem::path &project) {
         oldest_ma = std::max(oldest_ma, event.age_ma);
     }
     options.ages_ma = isochronAges(oldest_ma);
+    // Every track's data, so the side pane only chooses: a lane for every taxon (none ticked at
+    // first), zones of every scheme, dates, and the age models built for the isochrons anyway.
+    for (const Taxon &taxon : data.taxa) {
+        options.taxa.push_back(taxon.taxon);
+    }
+    options.zones = true;
+    options.dates = true;
+    options.age_model = true;
 
     ProjectPanel out;
     out.full = cli::panelInputFromDataset(data, options);

@@ -78,6 +78,8 @@ QString selectionDetails(const draw::PanelInput &shown, draw::ItemRole role, con
         text = tieDetails(shown, k);
     } else if (isIsochronRole(role)) {
         text = isochronDetails(shown, k);
+    } else if (isColumnTrackRole(role)) {
+        text = describeTrackItem(shown, draw::ItemTag{role, k}, std::nullopt, std::nullopt);
     } else if (role == draw::ItemRole::Title || role == draw::ItemRole::Subtitle ||
                role == draw::ItemRole::DrilledBase || role == draw::ItemRole::ColumnNote) {
         text = holeDetails(shown, k);

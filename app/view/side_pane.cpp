@@ -1,5 +1,7 @@
 #include "view/side_pane.hpp"
 
+#include <QCheckBox>
+#include <QGridLayout>
 #include <QGroupBox>
 #include <QHBoxLayout>
 #include <QLabel>
@@ -88,8 +90,27 @@ SidePane::SidePane(QWidget *parent) : QWidget(parent) {
     connect(up, &QPushButton::clicked, this, [this] { moveSelectedHole(-1); });
     connect(down, &QPushButton::clicked, this, [this] { moveSelectedHole(+1); });
 
+    // Column tracks, named as `atollog panel --tracks` names them.
+    auto *tracks = new QWidget(this);
+    auto *grid = new QGridLayout(tracks);
+    grid->setContentsMargins(0, 0, 0, 0);
+    const QString words[] = {QStringLiteral("runs"),  QStringLiteral("lithology"),
+                             QStringLiteral("surfaces"), QStringLiteral("samples"),
+                             QStringLiteral("taxa"),  QStringLiteral("zones"),
+                             QStringLiteral("dates"), QStringLiteral("model")};
+    for (int i = 0; i < 8; ++i) {
+        auto *box = new QCheckBox(words[i], tracks);
+        box->setObjectName(QStringLiteral("track-") + words[i]);
+        grid->addWidget(box, i / 4, i % 4);
+        track_boxes_.emplace_back(words[i], box);
+    }
+    setTracks(draw::HoleColumnTracks{});
+    taxa_ = checkList(this);
+
     auto *layout = new QVBoxLayout(this);
     layout->addWidget(group(tr("Selected"), details_scroll), 2);
+    layout->addWidget(group(tr("Column tracks"), tracks), 0);
+    layout->addWidget(group(tr("Taxon lanes"), taxa_), 2);
     events_box_ = group(QString(), events_);
     isochrons_box_ = group(QString(), isochrons_);
     layout->addWidget(events_box_, 3);
@@ -105,6 +126,10 @@ SidePane::SidePane(QWidget *parent) : QWidget(parent) {
     };
     connect(events_, &QListWidget::itemChanged, this, changed);
     connect(isochrons_, &QListWidget::itemChanged, this, changed);
+    connect(taxa_, &QListWidget::itemChanged, this, changed);
+    for (const auto &[word, box] : track_boxes_) {
+        connect(box, &QCheckBox::toggled, this, changed);
+    }
     // A drag inside the hole list moves a row: the model reports it as rows moved.
     connect(holes_->model(), &QAbstractItemModel::rowsMoved, this, changed);
 }
@@ -120,6 +145,19 @@ void SidePane::setContent(const draw::PanelInput &full, const PanelChoice &choic
     }
     fillChecks(events_, events, choice.shown_events);
     fillChecks(isochrons_, ages, choice.shown_isochrons);
+    // Every column carries the same lanes (panelInputFromDataset), so the first names them.
+    const std::set<std::string> was = shownTaxa();
+    taxa_->clear();
+    if (!full.columns.empty()) {
+        for (const draw::ColumnTaxonRange &t : full.columns.front().taxa) {
+            auto *item = new QListWidgetItem(
+                QString::fromStdString(t.name.empty() ? t.taxon : t.name + " (" + t.taxon + ")"),
+                taxa_);
+            item->setData(Qt::UserRole, QString::fromStdString(t.taxon));
+            item->setFlags(Qt::ItemIsEnabled | Qt::ItemIsUserCheckable);
+            item->setCheckState(was.count(t.taxon) ? Qt::Checked : Qt::Unchecked);
+        }
+    }
     filling_ = false;
     updateCounts();
     // Long lists open where the shown entries are, not at an unticked top.
@@ -145,6 +183,52 @@ PanelChoice SidePane::choice() const {
     c.shown_events = ticked(events_);
     c.shown_isochrons = ticked(isochrons_);
     return c;
+}
+
+draw::HoleColumnTracks SidePane::tracks() const {
+    draw::HoleColumnTracks t;
+    const auto on = [this](const char *word) { return trackBox(QLatin1String(word))->isChecked(); };
+    t.core_runs = on("runs");
+    t.lithology = on("lithology");
+    t.surfaces = on("surfaces");
+    t.samples = on("samples");
+    t.taxa = on("taxa");
+    t.zones = on("zones");
+    t.dates = on("dates");
+    t.age_model = on("model");
+    return t;
+}
+
+void SidePane::setTracks(const draw::HoleColumnTracks &t) {
+    const bool was = filling_;
+    filling_ = true;
+    const std::pair<const char *, bool> flags[] = {
+        {"runs", t.core_runs}, {"lithology", t.lithology}, {"surfaces", t.surfaces},
+        {"samples", t.samples}, {"taxa", t.taxa},          {"zones", t.zones},
+        {"dates", t.dates},     {"model", t.age_model}};
+    for (const auto &[word, on] : flags) {
+        trackBox(QLatin1String(word))->setChecked(on);
+    }
+    filling_ = was;
+}
+
+QCheckBox *SidePane::trackBox(const QString &word) const {
+    for (const auto &[w, box] : track_boxes_) {
+        if (w == word) {
+            return box;
+        }
+    }
+    return nullptr;
+}
+
+std::set<std::string> SidePane::shownTaxa() const {
+    std::set<std::string> out;
+    for (int i = 0; taxa_ && i < taxa_->count(); ++i) {
+        if (taxa_->item(i)->checkState() == Qt::Checked) {
+            out.insert(taxa_->item(i)->data(Qt::UserRole).toString().toStdString());
+        }
+    }
+    return out;
 }
 
 void SidePane::updateCounts() {

@@ -146,3 +146,35 @@ TEST_CASE("panel draws the holes with ties and isochrons headless", "[unit][cli]
     const auto wrong_ext = runAtollog({"panel", p, "--out", (tmp / "panel.bmp").string()});
     CHECK(wrong_ext.exit_code == 2);
 }
+
+TEST_CASE("panel tracks: taxa, zones, dates and the model; bad values named",
+          "[unit][cli][correlation][panel]") {
+    TempDir tmp("panel-tracks");
+    const auto p = importedDemo(tmp);
+    const auto svg = (tmp / "tracks.svg").string();
+    const auto r = runAtollog({"panel", p, "--out", svg, "--holes", "TOR1,OSS1", "--taxa",
+                               "CONV-MIN,LEPT-TEN", "--tracks",
+                               "runs,lithology,samples,taxa,zones,dates,model", "--zone-scheme",
+                               "VL larger benthic foraminifera", "--draws", "300",
+                               "--outlier-draws", "0", "--core-top-open", "--date", "2026-12-01"});
+    INFO(r.err);
+    REQUIRE(r.exit_code == 0);
+    std::ifstream in(svg);
+    const std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+    for (const char* word : {"Conovessa minor", "Lepidotorma tenuimura",
+                             "VL larger benthic foraminifera", "age model: median, 95 % band"})
+        CHECK(text.find(word) != std::string::npos);
+
+    const auto bad_track = runAtollog({"panel", p, "--out", svg, "--tracks", "runs,fossils"});
+    CHECK(bad_track.exit_code == 2);
+    CHECK(bad_track.err.find("'fossils' is not a track") != std::string::npos);
+    CHECK(bad_track.err.find("runs,lithology,surfaces,samples,taxa,zones,dates,model") !=
+          std::string::npos);
+    const auto bad_taxon = runAtollog({"panel", p, "--out", svg, "--taxa", "NOPE-XX"});
+    CHECK(bad_taxon.exit_code == 2);
+    CHECK(bad_taxon.err.find("no taxon 'NOPE-XX'") != std::string::npos);
+    const auto scheme_alone =
+        runAtollog({"panel", p, "--out", svg, "--zone-scheme", "VL larger benthic foraminifera"});
+    CHECK(scheme_alone.exit_code == 2);
+    CHECK(scheme_alone.err.find("add zones to --tracks") != std::string::npos);
+}

@@ -137,7 +137,7 @@ TEST_CASE("Texture class sets the box width, finer textures narrower", "[draw][c
     CHECK(w(11) < w(12));
     CHECK(w(14) == Approx(w(3))); // dolostone keeps its texture's width
     // Basalt fills the lithology track.
-    const HoleColumnTrackPositions x = holeColumnTrackPositions({}, HoleColumnStyle{}, 10.0);
+    const HoleColumnTrackPositions x = holeColumnTrackPositions(HoleColumnInput{}, HoleColumnStyle{}, 10.0);
     CHECK(w(13) == Approx(x.lithology_right_mm - x.lithology_left_mm));
     CHECK(w(12) < w(13));
     // Every box starts at the track's left edge, so the right edge is the texture profile.

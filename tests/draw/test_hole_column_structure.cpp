@@ -102,8 +102,8 @@ TEST_CASE("Hidden tracks take no items and no room", "[draw][column]") {
     CHECK(itemsOf<Rect>(b, ItemRole::RecoveryRun).empty());
     CHECK(itemsOf<Rect>(b, ItemRole::LithologyInterval).size() == full.intervals.size());
     const HoleColumnStyle s;
-    const HoleColumnTrackPositions xa = holeColumnTrackPositions(full.tracks, s, 0.0);
-    const HoleColumnTrackPositions xb = holeColumnTrackPositions(lean.tracks, s, 0.0);
+    const HoleColumnTrackPositions xa = holeColumnTrackPositions(full, s, 0.0);
+    const HoleColumnTrackPositions xb = holeColumnTrackPositions(lean, s, 0.0);
     CHECK(xa.right_mm - xb.right_mm ==
           Approx(s.run_track_width_mm + s.sample_track_width_mm + 2 * s.track_gap_mm));
 

@@ -82,17 +82,17 @@ TEST_CASE("Tie lines end at the picked levels on the lithology track edges", "[p
     const DisplayList list = layoutPanel(samplePanel(), samplePanelView(), &g);
     const std::string top = "top Maruvaiella alta";
     // Levels 10.2 m (MRV-L1), 8.0 m (MRV-F2), 11.5 m (MRV-R3).
-    const Line &first = joinFrom(list, ItemRole::TieLine, top, g.lithology_right_mm[0]);
-    CHECK(yAt(first, g.lithology_right_mm[0]) == Approx(panelY_mm(g, 0, 10.2)).margin(1e-9));
+    const Line &first = joinFrom(list, ItemRole::TieLine, top, g.link_out_mm[0]);
+    CHECK(yAt(first, g.link_out_mm[0]) == Approx(panelY_mm(g, 0, 10.2)).margin(1e-9));
     CHECK(yAt(first, g.lithology_left_mm[1]) == Approx(panelY_mm(g, 1, 8.0)).margin(1e-9));
     CHECK(first.stroke.dash == DashStyle::Solid);
-    const Line &second = joinFrom(list, ItemRole::TieLine, top, g.lithology_right_mm[1]);
+    const Line &second = joinFrom(list, ItemRole::TieLine, top, g.link_out_mm[1]);
     CHECK(yAt(second, g.lithology_left_mm[2]) == Approx(panelY_mm(g, 2, 11.5)).margin(1e-9));
 
     // The band joins the brackets 9.6-10.9 m (L1) and 7.4-8.6 m (F2).
     const auto bands = itemsOf<Polygon>(list, ItemRole::TieBand);
     const auto band = std::find_if(bands.begin(), bands.end(), [&](const Polygon *p) {
-        return p->tag.key == top && p->points[0].x_mm == g.lithology_right_mm[0];
+        return p->tag.key == top && p->points[0].x_mm == g.link_out_mm[0];
     });
     REQUIRE(band != bands.end());
     const std::vector<PointMm> &pts = (*band)->points;
@@ -104,14 +104,14 @@ TEST_CASE("Tie lines end at the picked levels on the lithology track edges", "[p
 
     SECTION("a tie missing from the middle hole skips it with a dashed line") {
         const Line &skip =
-            joinFrom(list, ItemRole::TieLine, "base Tavoripora rosea", g.lithology_right_mm[0]);
+            joinFrom(list, ItemRole::TieLine, "base Tavoripora rosea", g.link_out_mm[0]);
         CHECK(skip.stroke.dash == DashStyle::Dashed);
         CHECK(std::max(skip.from.x_mm, skip.to.x_mm) == Approx(g.lithology_left_mm[2]));
         CHECK(yAt(skip, g.lithology_left_mm[2]) == Approx(panelY_mm(g, 2, 31.0)).margin(1e-9));
     }
     SECTION("isochrons join their medians, dotted, and are told apart from ties") {
-        const Line &iso = joinFrom(list, ItemRole::Isochron, "0.400 Ma", g.lithology_right_mm[1]);
-        CHECK(yAt(iso, g.lithology_right_mm[1]) == Approx(panelY_mm(g, 1, 39.2)).margin(1e-9));
+        const Line &iso = joinFrom(list, ItemRole::Isochron, "0.400 Ma", g.link_out_mm[1]);
+        CHECK(yAt(iso, g.link_out_mm[1]) == Approx(panelY_mm(g, 1, 39.2)).margin(1e-9));
         CHECK(yAt(iso, g.lithology_left_mm[2]) == Approx(panelY_mm(g, 2, 44.6)).margin(1e-9));
         CHECK(iso.stroke.dash == DashStyle::Dotted);
         CHECK(iso.stroke.colour != first.stroke.colour);

@@ -80,7 +80,7 @@ TEST_CASE("screenshot of the demo project", "[.look]") {
     view::PanelCanvas *canvas = w.window.canvas();
     const auto &g = canvas->scene().geometry;
     const QPointF between = canvas->transform().toWidget(draw::PointMm{
-        (g.lithology_right_mm[0] + g.lithology_left_mm[1]) / 2, g.axis_origin_y_mm + 20.0});
+        (g.link_out_mm[0] + g.lithology_left_mm[1]) / 2, g.axis_origin_y_mm + 20.0});
     for (int i = 0; i < 3; ++i) {
         QWheelEvent wheel(between, canvas->mapToGlobal(between), QPoint(), QPoint(0, 120),
                           Qt::NoButton, Qt::NoModifier, Qt::NoScrollPhase, false);

@@ -2,6 +2,7 @@
 // export, and a bad project path, with the panel built by hand (sample_panel.hpp).
 #include "canvas_fixture.hpp"
 
+#include "view/axis_readout.hpp"
 #include "view/main_window.hpp"
 #include "view/side_pane.hpp"
 
@@ -189,4 +190,38 @@ TEST_CASE("export writes the panel as shown", "[view][window]") {
     CHECK_FALSE(w.window.exportTo(dir.filePath(QStringLiteral("panel.txt")),
                                   draw::PdfPageSize::FitChart, 150));
     CHECK(w.messages.texts.size() == 1);
+}
+
+TEST_CASE("the age axis stands equal ages level and refuses flattening", "[view][window]") {
+    Messages messages;
+    MainWindow window;
+    window.setMessageSink(messages.sink());
+    window.resize(1200, 800);
+    window.show();
+    REQUIRE(QTest::qWaitForWindowExposed(&window));
+    draw::PanelInput full = samplePanel();
+    // AX1 accumulates 0.02 Myr per metre, AX3 0.01: 0.4 Ma lies at 20 m and 40 m. AX2 has no
+    // model and keeps only its header.
+    full.columns[0].age_model.rows = {{0.0, 0.0, 0.0, 0.01}, {40.0, 0.75, 0.8, 0.85}};
+    full.columns[2].age_model.rows = {{0.0, 0.0, 0.0, 0.01}, {44.0, 0.42, 0.44, 0.46}};
+    window.showPanel(full, showEverything(full));
+
+    window.ageAction()->trigger();
+    REQUIRE(window.panelView().axis == draw::PanelAxis::Age);
+    CHECK_FALSE(window.flattenCombo()->isEnabled());
+    CHECK_FALSE(window.panelView().flatten_on.has_value());
+    const PanelScene &scene = window.canvas()->scene();
+    REQUIRE(messages.texts.isEmpty());
+    const auto &g = scene.geometry;
+    CHECK_THAT(draw::panelY_mm(g, 0, 20.0), WithinAbs(draw::panelY_mm(g, 2, 40.0), 1e-9));
+    CHECK_FALSE(g.column_scales[1].has_value());
+    // The cursor readout gives the age on the axis and the depth in the hole under it.
+    const double y = draw::panelY_mm(g, 2, 40.0);
+    const QString readout = axisReadout(
+        scene, draw::PointMm{(g.lithology_left_mm[2] + g.lithology_right_mm[2]) / 2, y});
+    CHECK(readout.contains(QStringLiteral("age 0.400 Ma")));
+    CHECK(readout.contains(QStringLiteral("AX3: 40.00 m below collar")));
+
+    window.depthAction()->trigger();
+    CHECK(window.flattenCombo()->isEnabled());
 }
