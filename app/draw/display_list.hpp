@@ -91,8 +91,9 @@ struct Stroke {
     DashStyle dash = DashStyle::Solid;
 };
 
-/// Area fills drawn as vector line work (never as bitmaps), so SVG and PDF stay sharp; each is
-/// anchored at the scene origin, so boxes that touch continue one another. The numbered ones
+/// Area fills drawn as vector line work into SVG and PDF, so they stay sharp, and from cached
+/// tiles of that line work on raster devices (fill_pattern_tile_brush.hpp); each is anchored at
+/// the scene origin, so boxes that touch continue one another. The numbered ones
 /// follow the style of FGDC-STD-013-2006 section 37 (numbers and names checked against a
 /// copy of the standard's pattern chart; the line work is drawn from memory, see
 /// fill_pattern_painter.cpp): Limestone 627, Dolostone 642, Sand 607 (massive sand or

@@ -2,6 +2,7 @@
 
 #include "draw/output_file.hpp"
 #include "draw/paint_display_list.hpp"
+#include "draw/png_encoder.hpp"
 
 #include <QImage>
 #include <QPainter>
@@ -18,11 +19,12 @@ namespace atollog::draw {
 namespace {
 constexpr double kMmPerInch = 25.4;
 constexpr double kMaxSide_px = 32767.0; // QImage and QPainter coordinates are limited to this
-// Qt maps a PNG quality to a zlib level (lower quality, harder compression); 90 keeps the file
-// lossless and about a fifth larger, and writes a poster-sized panel in half the time.
-constexpr int kPngQuality = 90;
 // Below this many rows a band is not worth a thread.
 constexpr int kMinBandRows = 512;
+
+int hardwareThreads() {
+    return static_cast<int>(std::max(1u, std::thread::hardware_concurrency()));
+}
 
 /// Paints the list into horizontal bands of `image` at once, one thread per band, each through
 /// its own QImage over the band's rows (painting on separate QImages from several threads is
@@ -30,8 +32,7 @@ constexpr int kMinBandRows = 512;
 /// exactly what one pass would (an item crossing a band edge is painted, clipped, in both).
 void paintInBands(QImage &image, const DisplayList &list, const RectMm &page, double px_per_mm) {
     const int rows = image.height();
-    const int hw = static_cast<int>(std::max(1u, std::thread::hardware_concurrency()));
-    const int bands = std::clamp(rows / kMinBandRows, 1, hw);
+    const int bands = std::clamp(rows / kMinBandRows, 1, hardwareThreads());
     std::vector<std::thread> threads;
     std::vector<std::exception_ptr> errors(static_cast<std::size_t>(bands));
     for (int b = 0; b < bands; ++b) {
@@ -82,9 +83,14 @@ void exportPng(const DisplayList &list, const std::filesystem::path &path, doubl
     image.setDotsPerMeterX(dots_per_metre);
     image.setDotsPerMeterY(dots_per_metre);
     paintInBands(image, list, page, px_per_mm);
+    // Our own encoder rather than QImage::save: Qt's writer runs zlib on one thread after
+    // libpng's filter search, and at its fast settings stores the pixels uncompressed (96 MB for
+    // a 4,000 x 8,000 px panel). This one writes 8 MB in half the time on one thread, a third
+    // on two.
+    const QByteArray png = encodePng(image, hardwareThreads());
     QFile file;
     openOutputFile(file, path, "PNG");
-    if (!image.save(&file, "PNG", kPngQuality)) {
+    if (file.write(png) != png.size()) {
         throw std::runtime_error("cannot write PNG file '" + path.string() +
                                  "': " + file.errorString().toStdString());
     }

@@ -3,6 +3,7 @@
 #include <QPainter>
 #include <QPainterPath>
 #include <QPen>
+#include <QTransform>
 
 #include <cmath>
 
@@ -11,7 +12,6 @@ namespace atollog::draw {
 namespace {
 
 constexpr double kPatternLine_mm = 0.15;
-constexpr double kSmallestPatternedBox_px = 3.0;
 
 // FGDC-STD-013-2006 pattern 627 (limestone) is a brick bond: courses of horizontal lines with
 // vertical joints offset by half a brick in alternate courses.
@@ -25,9 +25,12 @@ constexpr double kDoloJointLean_mm = 1.0;
 
 // Pattern 607 (massive sand or sandstone): a stipple of fine dots. The dots sit one per 1 mm
 // cell, moved within it by a fixed hash of the cell, so the stipple looks irregular but every
-// backend and every run draws the same dots.
+// backend and every run draws the same dots. The hash takes the cell indices modulo 8, so the
+// stipple repeats every 8 mm: raster output paints it from a tile of whole repeats (see
+// fill_pattern_tile.hpp), and a repeat of 64 irregular dots hardly shows.
 constexpr double kSandCell_mm = 1.0;
 constexpr double kSandDotRadius_mm = 0.12;
+constexpr long long kSandRepeatCells = 8;
 
 // Pattern 620 (clay or clay shale): short horizontal dashes in rows, alternate rows offset by
 // half a period.
@@ -35,9 +38,12 @@ constexpr double kClayRow_mm = 1.2;
 constexpr double kClayDash_mm = 1.6;
 constexpr double kClayGap_mm = 0.8;
 
-// Pattern 601 (gravel or conglomerate): small open rings of unequal size, staggered.
+// Pattern 601 (gravel or conglomerate): small open rings of unequal size, staggered. The sizes
+// repeat every 5 rings along a row and every 4 rows (12 x 8 mm), so the pattern tiles.
 constexpr double kGravelRow_mm = 2.0;
 constexpr double kGravelPitch_mm = 2.4;
+constexpr long long kGravelRepeatColumns = 5;
+constexpr long long kGravelRepeatRows = 4;
 constexpr double kGravelMinRadius_mm = 0.35;
 constexpr double kGravelMaxRadius_mm = 0.6;
 
@@ -53,6 +59,13 @@ constexpr double kTuffRow_mm = 2.6;
 constexpr double kTuffPitch_mm = 3.4;
 constexpr double kTuffVWidth_mm = 0.8;
 constexpr double kTuffVHeight_mm = 0.7;
+// The tuff's stipple has one dot per cell of half a pitch by half a row (1.7 x 1.3 mm, about
+// twice a sand cell, so the marks stay the main sign), repeating every 8 x 8 cells: 13.6 x
+// 10.4 mm, four pitches by four rows of the marks, so marks and dots repeat together.
+constexpr double kTuffCellWidth_mm = kTuffPitch_mm / 2;
+constexpr double kTuffCellHeight_mm = kTuffRow_mm / 2;
+constexpr long long kTuffRepeatColumns = 8;
+constexpr long long kTuffRepeatRows = 8;
 
 // atollog's own reef-framework pattern: staggered rows of small domes (open upward arcs),
 // because the standard has none for reef rock.
@@ -62,6 +75,12 @@ constexpr double kDomeRadius_mm = 0.8;
 
 double firstMultipleAtOrBefore(double v, double step) {
     return std::floor(v / step) * step;
+}
+
+/// i modulo n in [0, n), also for negative i.
+long long wrapped(long long i, long long n) {
+    const long long r = i % n;
+    return r < 0 ? r + n : r;
 }
 
 /// A number in [0, 1) fixed by a cell's indices (SplitMix64's finaliser, Steele, Lea & Flood
@@ -74,6 +93,12 @@ double cellHash(long long i, long long j, unsigned salt) {
     z ^= z >> 31;
     return static_cast<double>(z >> 11) * 0x1.0p-53;
 }
+
+/// A pattern's marks: stroked lines and filled dots.
+struct PatternPaths {
+    QPainterPath lines;
+    QPainterPath dots;
+};
 
 /// Calls f(column, row, x, y) for every point of a staggered lattice (rows `row_mm` apart,
 /// points `pitch_mm` apart, odd rows shifted by half a pitch) near the box, one lattice step
@@ -93,23 +118,28 @@ void forStaggeredLattice(const RectMm &box, double row_mm, double pitch_mm, F &&
     }
 }
 
-void addStipple(QPainterPath &dots, const RectMm &box, double cell_mm, unsigned salt) {
-    const auto i0 = static_cast<long long>(std::floor(box.left_mm / cell_mm)) - 1;
-    const auto i1 = static_cast<long long>(std::ceil(box.right_mm() / cell_mm)) + 1;
-    const auto j0 = static_cast<long long>(std::floor(box.top_mm / cell_mm)) - 1;
-    const auto j1 = static_cast<long long>(std::ceil(box.bottom_mm() / cell_mm)) + 1;
+/// One dot per cell, placed by a hash of the cell's indices taken modulo the repeat, so the
+/// stipple repeats every repeat_i x repeat_j cells.
+void addStipple(QPainterPath &dots, const RectMm &box, double cell_w_mm, double cell_h_mm,
+                long long repeat_i, long long repeat_j, unsigned salt) {
+    const auto i0 = static_cast<long long>(std::floor(box.left_mm / cell_w_mm)) - 1;
+    const auto i1 = static_cast<long long>(std::ceil(box.right_mm() / cell_w_mm)) + 1;
+    const auto j0 = static_cast<long long>(std::floor(box.top_mm / cell_h_mm)) - 1;
+    const auto j1 = static_cast<long long>(std::ceil(box.bottom_mm() / cell_h_mm)) + 1;
     for (long long j = j0; j <= j1; ++j) {
         for (long long i = i0; i <= i1; ++i) {
-            const double x = (static_cast<double>(i) + 0.15 + 0.7 * cellHash(i, j, salt)) * cell_mm;
+            const long long hi = wrapped(i, repeat_i), hj = wrapped(j, repeat_j);
+            const double x =
+                (static_cast<double>(i) + 0.15 + 0.7 * cellHash(hi, hj, salt)) * cell_w_mm;
             const double y =
-                (static_cast<double>(j) + 0.15 + 0.7 * cellHash(i, j, salt + 1)) * cell_mm;
+                (static_cast<double>(j) + 0.15 + 0.7 * cellHash(hi, hj, salt + 1)) * cell_h_mm;
             dots.addEllipse(QPointF(x, y), kSandDotRadius_mm, kSandDotRadius_mm);
         }
     }
 }
 
-void paintDolostone(QPainter &p, const RectMm &box) {
-    QPainterPath path;
+void addDolostone(PatternPaths &out, const RectMm &box) {
+    QPainterPath &path = out.lines;
     const double y0 = firstMultipleAtOrBefore(box.top_mm, kBrickCourse_mm);
     for (double y = y0; y <= box.bottom_mm(); y += kBrickCourse_mm) {
         path.moveTo(box.left_mm, y);
@@ -125,35 +155,33 @@ void paintDolostone(QPainter &p, const RectMm &box) {
             path.lineTo(x + kDoloJointLean_mm, y + kBrickCourse_mm);
         }
     }
-    p.drawPath(path);
 }
 
-void paintSand(QPainter &p, const RectMm &box) {
-    QPainterPath dots;
-    addStipple(dots, box, kSandCell_mm, 7u);
-    p.fillPath(dots, Qt::black);
+void addSand(PatternPaths &out, const RectMm &box) {
+    QPainterPath &dots = out.dots;
+    addStipple(dots, box, kSandCell_mm, kSandCell_mm, kSandRepeatCells, kSandRepeatCells, 7u);
 }
 
-void paintClay(QPainter &p, const RectMm &box) {
-    QPainterPath path;
+void addClay(PatternPaths &out, const RectMm &box) {
+    QPainterPath &path = out.lines;
     const double period = kClayDash_mm + kClayGap_mm;
     forStaggeredLattice(box, kClayRow_mm, period, [&](long long, long long, double x, double y) {
         path.moveTo(x, y);
         path.lineTo(x + kClayDash_mm, y);
     });
-    p.drawPath(path);
 }
 
-void paintGravel(QPainter &p, const RectMm &box) {
-    QPainterPath path;
+void addGravel(PatternPaths &out, const RectMm &box) {
+    QPainterPath &path = out.lines;
     forStaggeredLattice(
         box, kGravelRow_mm, kGravelPitch_mm, [&](long long c, long long r, double x, double y) {
-            const double radius = kGravelMinRadius_mm +
-                                  (kGravelMaxRadius_mm - kGravelMinRadius_mm) * cellHash(c, r, 3u);
+            const double radius =
+                kGravelMinRadius_mm +
+                (kGravelMaxRadius_mm - kGravelMinRadius_mm) *
+                    cellHash(wrapped(c, kGravelRepeatColumns), wrapped(r, kGravelRepeatRows), 3u);
             // Slightly flattened, as pebbles lie on their flat side.
             path.addEllipse(QPointF(x, y + kGravelRow_mm / 2), radius, radius * 0.75);
         });
-    p.drawPath(path);
 }
 
 void addVMarks(QPainterPath &path, const RectMm &box, double row_mm, double pitch_mm,
@@ -166,24 +194,21 @@ void addVMarks(QPainterPath &path, const RectMm &box, double row_mm, double pitc
     });
 }
 
-void paintBasalt(QPainter &p, const RectMm &box) {
-    QPainterPath path;
+void addBasalt(PatternPaths &out, const RectMm &box) {
+    QPainterPath &path = out.lines;
     addVMarks(path, box, kBasaltRow_mm, kBasaltPitch_mm, kBasaltVWidth_mm, kBasaltVHeight_mm);
-    p.drawPath(path);
 }
 
-void paintVolcaniclastic(QPainter &p, const RectMm &box) {
-    QPainterPath path;
+void addVolcaniclastic(PatternPaths &out, const RectMm &box) {
+    QPainterPath &path = out.lines;
     addVMarks(path, box, kTuffRow_mm, kTuffPitch_mm, kTuffVWidth_mm, kTuffVHeight_mm);
-    p.drawPath(path);
-    QPainterPath dots;
-    // A sparser stipple than sand (cells twice as large), so the marks stay the main sign.
-    addStipple(dots, box, 2 * kSandCell_mm, 11u);
-    p.fillPath(dots, Qt::black);
+    QPainterPath &dots = out.dots;
+    addStipple(dots, box, kTuffCellWidth_mm, kTuffCellHeight_mm, kTuffRepeatColumns,
+               kTuffRepeatRows, 11u);
 }
 
-void paintBricks(QPainter &p, const RectMm &box) {
-    QPainterPath path;
+void addBricks(PatternPaths &out, const RectMm &box) {
+    QPainterPath &path = out.lines;
     const double y0 = firstMultipleAtOrBefore(box.top_mm, kBrickCourse_mm);
     for (double y = y0; y <= box.bottom_mm(); y += kBrickCourse_mm) {
         path.moveTo(box.left_mm, y);
@@ -196,11 +221,10 @@ void paintBricks(QPainter &p, const RectMm &box) {
             path.lineTo(x, y + kBrickCourse_mm);
         }
     }
-    p.drawPath(path);
 }
 
-void paintDomes(QPainter &p, const RectMm &box) {
-    QPainterPath path;
+void addDomes(PatternPaths &out, const RectMm &box) {
+    QPainterPath &path = out.lines;
     const double y0 = firstMultipleAtOrBefore(box.top_mm, kDomeRow_mm);
     for (double y = y0; y <= box.bottom_mm() + kDomeRow_mm; y += kDomeRow_mm) {
         const auto row = static_cast<long long>(std::llround(y / kDomeRow_mm));
@@ -213,10 +237,89 @@ void paintDomes(QPainter &p, const RectMm &box) {
             path.arcTo(circle, 0.0, 180.0); // upper half: a dome on the row line
         }
     }
-    p.drawPath(path);
 }
 
 } // namespace
+
+PeriodMm fillPatternPeriod(FillPattern pattern) {
+    switch (pattern) {
+    case FillPattern::Limestone:
+    case FillPattern::Dolostone:
+        // Two courses (the joints alternate) by one brick.
+        return {kBrickLength_mm, 2 * kBrickCourse_mm};
+    case FillPattern::Sand:
+        return {kSandRepeatCells * kSandCell_mm, kSandRepeatCells * kSandCell_mm};
+    case FillPattern::Clay:
+        return {kClayDash_mm + kClayGap_mm, 2 * kClayRow_mm};
+    case FillPattern::Gravel:
+        return {kGravelRepeatColumns * kGravelPitch_mm, kGravelRepeatRows * kGravelRow_mm};
+    case FillPattern::Basalt:
+        return {kBasaltPitch_mm, 2 * kBasaltRow_mm};
+    case FillPattern::Volcaniclastic:
+        return {kTuffRepeatColumns * kTuffCellWidth_mm, kTuffRepeatRows * kTuffCellHeight_mm};
+    case FillPattern::ReefFramework:
+        return {kDomePitch_mm, 2 * kDomeRow_mm};
+    case FillPattern::None:
+        break;
+    }
+    return {0.0, 0.0};
+}
+
+bool boxTooSmallForPattern(const QTransform &to_device, const RectMm &box) {
+    const QRectF device =
+        to_device.mapRect(QRectF(box.left_mm, box.top_mm, box.width_mm, box.height_mm));
+    return device.height() < kSmallestPatternedBox_px || device.width() < kSmallestPatternedBox_px;
+}
+
+void drawFillPatternLineWork(QPainter &p, FillPattern pattern, const RectMm &region,
+                             const QTransform &scene_to_painter) {
+    PatternPaths paths;
+    switch (pattern) {
+    case FillPattern::Limestone:
+        addBricks(paths, region);
+        break;
+    case FillPattern::Dolostone:
+        addDolostone(paths, region);
+        break;
+    case FillPattern::Sand:
+        addSand(paths, region);
+        break;
+    case FillPattern::Clay:
+        addClay(paths, region);
+        break;
+    case FillPattern::Gravel:
+        addGravel(paths, region);
+        break;
+    case FillPattern::Basalt:
+        addBasalt(paths, region);
+        break;
+    case FillPattern::Volcaniclastic:
+        addVolcaniclastic(paths, region);
+        break;
+    case FillPattern::ReefFramework:
+        addDomes(paths, region);
+        break;
+    case FillPattern::None:
+        break;
+    }
+    double line_width = kPatternLine_mm;
+    if (!scene_to_painter.isIdentity()) {
+        paths.lines = scene_to_painter.map(paths.lines);
+        paths.dots = scene_to_painter.map(paths.dots);
+        line_width *= std::sqrt(std::abs(scene_to_painter.determinant()));
+    }
+    QPen pen(Qt::black);
+    pen.setWidthF(line_width);
+    pen.setCapStyle(Qt::FlatCap);
+    p.setPen(pen);
+    p.setBrush(Qt::NoBrush);
+    if (!paths.lines.isEmpty()) {
+        p.drawPath(paths.lines);
+    }
+    if (!paths.dots.isEmpty()) {
+        p.fillPath(paths.dots, Qt::black);
+    }
+}
 
 void paintFillPattern(QPainter &p, FillPattern pattern, const RectMm &box) {
     if (pattern == FillPattern::None) {
@@ -225,46 +328,12 @@ void paintFillPattern(QPainter &p, FillPattern pattern, const RectMm &box) {
     // A box under a few device pixels shows no pattern, only a smudge of its lines: skip it
     // (its fill colour is still painted). Why: a whole-campaign panel at screen or poster size
     // has tens of thousands of such boxes, and their line work was most of the painting time.
-    const QRectF device = p.worldTransform().mapRect(
-        QRectF(box.left_mm, box.top_mm, box.width_mm, box.height_mm));
-    if (device.height() < kSmallestPatternedBox_px || device.width() < kSmallestPatternedBox_px) {
+    if (boxTooSmallForPattern(p.worldTransform(), box)) {
         return;
     }
     p.save();
     p.setClipRect(QRectF(box.left_mm, box.top_mm, box.width_mm, box.height_mm), Qt::IntersectClip);
-    QPen pen(Qt::black);
-    pen.setWidthF(kPatternLine_mm);
-    pen.setCapStyle(Qt::FlatCap);
-    p.setPen(pen);
-    p.setBrush(Qt::NoBrush);
-    switch (pattern) {
-    case FillPattern::Limestone:
-        paintBricks(p, box);
-        break;
-    case FillPattern::Dolostone:
-        paintDolostone(p, box);
-        break;
-    case FillPattern::Sand:
-        paintSand(p, box);
-        break;
-    case FillPattern::Clay:
-        paintClay(p, box);
-        break;
-    case FillPattern::Gravel:
-        paintGravel(p, box);
-        break;
-    case FillPattern::Basalt:
-        paintBasalt(p, box);
-        break;
-    case FillPattern::Volcaniclastic:
-        paintVolcaniclastic(p, box);
-        break;
-    case FillPattern::ReefFramework:
-        paintDomes(p, box);
-        break;
-    case FillPattern::None:
-        break;
-    }
+    drawFillPatternLineWork(p, pattern, box, QTransform());
     p.restore();
 }
 

@@ -25,26 +25,37 @@ std::string intervalName(const ColumnInterval &iv) {
     throw std::invalid_argument("hole column of hole '" + in.hole + "': " + what);
 }
 
-void requireFinite(const HoleColumnInput &in, double v, const std::string &what) {
+// The item names below are passed as functions that build them, and built only when a check
+// fails: on the success path, formatting a name for every interval (two doubles through
+// snprintf) was most of the time of checking a long hole.
+
+void requireFinite(const HoleColumnInput &in, double v, const char *what) {
     if (!std::isfinite(v)) {
-        fail(in, what + " is " + std::to_string(v) + "; give a finite number");
+        fail(in, std::string(what) + " is " + std::to_string(v) + "; give a finite number");
+    }
+}
+
+template <class Name> void requireFinite(const HoleColumnInput &in, double v, const Name &what) {
+    if (!std::isfinite(v)) {
+        fail(in, what() + " is " + std::to_string(v) + "; give a finite number");
     }
 }
 
 /// A cored or logged span: finite ends, base below top, inside 0..drilled base.
-void requireSpan(const HoleColumnInput &in, double top_m, double base_m, const std::string &name) {
-    requireFinite(in, top_m, name + " top");
-    requireFinite(in, base_m, name + " base");
+template <class Name>
+void requireSpan(const HoleColumnInput &in, double top_m, double base_m, const Name &name) {
+    requireFinite(in, top_m, [&] { return name() + " top"; });
+    requireFinite(in, base_m, [&] { return name() + " base"; });
     if (base_m <= top_m) {
-        fail(in, name + ": base " + metresText(base_m) + " is not below its top " + metresText(top_m) +
-                     "; give base_m deeper than top_m");
+        fail(in, name() + ": base " + metresText(base_m) + " is not below its top " +
+                     metresText(top_m) + "; give base_m deeper than top_m");
     }
     if (top_m < 0.0) {
-        fail(in, name + ": top " + metresText(top_m) +
+        fail(in, name() + ": top " + metresText(top_m) +
                      " lies above the collar; depths are metres below the collar, 0 or more");
     }
     if (base_m > in.drilled_base_m) {
-        fail(in, name + ": base " + metresText(base_m) + " lies below the drilled base " +
+        fail(in, name() + ": base " + metresText(base_m) + " lies below the drilled base " +
                      metresText(in.drilled_base_m) + "; correct the depth or the drilled base");
     }
 }
@@ -71,30 +82,44 @@ void validateHoleColumnInput(const HoleColumnInput &in, const HoleColumnView &vi
     }
 
     for (const ColumnRun &r : in.runs) {
-        const std::string name = "run '" + r.id + "'";
+        const auto name = [&r] { return "run '" + r.id + "'"; };
         requireSpan(in, r.top_m, r.base_m, name);
-        requireFinite(in, r.recovered_m, name + " recovered length");
+        requireFinite(in, r.recovered_m, [&] { return name() + " recovered length"; });
         if (r.recovered_m < 0.0) {
-            fail(in, name + ": recovered " + metresText(r.recovered_m) +
+            fail(in, name() + ": recovered " + metresText(r.recovered_m) +
                          " is negative; give 0 m for a run that brought nothing back");
         }
         const double cored = r.base_m - r.top_m;
         if (r.recovered_m > cored) {
-            fail(in, name + " " + metresText(r.top_m) + " to " + metresText(r.base_m) + ": recovered " +
-                         metresText(r.recovered_m) + " exceeds the cored " + metresText(cored) +
+            fail(in, name() + " " + metresText(r.top_m) + " to " + metresText(r.base_m) +
+                         ": recovered " + metresText(r.recovered_m) + " exceeds the cored " +
+                         metresText(cored) +
                          "; clamp recovered_m to the cored length before drawing (core "
                          "expansion is not drawn)");
         }
     }
 
-    std::vector<const ColumnInterval *> by_top;
     for (const ColumnInterval &iv : in.intervals) {
-        requireSpan(in, iv.top_m, iv.base_m, intervalName(iv));
+        requireSpan(in, iv.top_m, iv.base_m, [&iv] { return intervalName(iv); });
+    }
+    // Overlaps are looked for in order of top. Logged intervals usually come in that order
+    // already, with tops strictly increasing: then the sort below would keep their order, and
+    // is skipped. (With two equal tops the sort decides which interval is named first, so it
+    // runs.) Sorting pointers keeps the check O(n log n) for long holes.
+    const auto top_not_above = [](const ColumnInterval &a, const ColumnInterval &b) {
+        return a.top_m >= b.top_m;
+    };
+    std::vector<const ColumnInterval *> by_top;
+    by_top.reserve(in.intervals.size());
+    for (const ColumnInterval &iv : in.intervals) {
         by_top.push_back(&iv);
     }
-    // Sorting a list of pointers keeps the check O(n log n) for long holes.
-    std::sort(by_top.begin(), by_top.end(),
-              [](const ColumnInterval *a, const ColumnInterval *b) { return a->top_m < b->top_m; });
+    if (std::adjacent_find(in.intervals.begin(), in.intervals.end(), top_not_above) !=
+        in.intervals.end()) {
+        std::sort(
+            by_top.begin(), by_top.end(),
+            [](const ColumnInterval *a, const ColumnInterval *b) { return a->top_m < b->top_m; });
+    }
     for (std::size_t i = 1; i < by_top.size(); ++i) {
         const ColumnInterval &upper = *by_top[i - 1];
         const ColumnInterval &lower = *by_top[i];
@@ -106,10 +131,10 @@ void validateHoleColumnInput(const HoleColumnInput &in, const HoleColumnView &vi
     }
 
     for (const ColumnSample &s : in.samples) {
-        const std::string name = "sample '" + s.id + "'";
-        requireFinite(in, s.depth_m, name + " depth");
+        const auto name = [&s] { return "sample '" + s.id + "'"; };
+        requireFinite(in, s.depth_m, [&] { return name() + " depth"; });
         if (s.depth_m < 0.0 || s.depth_m > in.drilled_base_m) {
-            fail(in, name + " at " + metresText(s.depth_m) + " lies outside the hole (0 m to " +
+            fail(in, name() + " at " + metresText(s.depth_m) + " lies outside the hole (0 m to " +
                          metresText(in.drilled_base_m) + "); correct its depth");
         }
     }

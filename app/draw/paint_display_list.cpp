@@ -2,7 +2,8 @@
 
 #include "draw/bundled_font.hpp"
 #include "draw/dash_pattern.hpp"
-#include "draw/fill_pattern_painter.hpp"
+#include "draw/fill_pattern_tile_brush.hpp"
+#include "draw/strokes_as_fills.hpp"
 #include "draw/text_extent.hpp"
 
 #include <QFont>
@@ -12,6 +13,7 @@
 #include <QPen>
 #include <QPolygonF>
 
+#include <algorithm>
 #include <cmath>
 #include <stdexcept>
 #include <string>
@@ -61,13 +63,27 @@ void strokePolyline(QPainter &p, const std::vector<PointMm> &points, const Strok
     }
 }
 
-void paintRect(QPainter &p, const Rect &r) {
+/// The colour of a stroke drawn as a fill (see StrokesAsFills).
+QColor fillColour(const Colour &c, double opacity) {
+    return QColor(c.r, c.g, c.b, static_cast<int>(std::lround(c.a * opacity)));
+}
+
+void paintRect(QPainter &p, const Rect &r, FillPatternTileBrushes &patterns,
+               const StrokesAsFills &strokes_as_fills) {
     const QRectF box(r.box.left_mm, r.box.top_mm, r.box.width_mm, r.box.height_mm);
     if (r.fill) {
         p.fillRect(box, toQColor(*r.fill));
     }
-    paintFillPattern(p, r.pattern, r.box);
-    if (r.stroke && r.stroke->dash == DashStyle::Solid) {
+    patterns.paint(p, r.pattern, r.box);
+    if (const auto outline = strokes_as_fills.boxOutline(r)) {
+        QPainterPath ring;
+        ring.setFillRule(Qt::OddEvenFill);
+        ring.addRect(outline->outer);
+        if (!outline->inner.isEmpty()) {
+            ring.addRect(outline->inner);
+        }
+        p.fillPath(ring, fillColour(r.stroke->colour, outline->opacity));
+    } else if (r.stroke && r.stroke->dash == DashStyle::Solid) {
         p.setPen(toQPen(*r.stroke));
         p.setBrush(Qt::NoBrush);
         p.drawRect(box);
@@ -83,7 +99,11 @@ void paintRect(QPainter &p, const Rect &r) {
     }
 }
 
-void paintLine(QPainter &p, const Line &l) {
+void paintLine(QPainter &p, const Line &l, const StrokesAsFills &strokes_as_fills) {
+    if (const auto covered = strokes_as_fills.line(l)) {
+        p.fillRect(covered->outer, fillColour(l.stroke.colour, covered->opacity));
+        return;
+    }
     strokePolyline(p, {l.from, l.to}, l.stroke);
 }
 
@@ -183,10 +203,29 @@ void paintText(QPainter &p, const Text &t, const QString &family) {
     p.restore();
 }
 
+/// itemBounds(item).intersects(visible), without itemBounds' allocation for the two kinds of
+/// item a panel is mostly made of (it about halved the time to cull 156,000 items).
+/// The boxes are built exactly as itemBounds builds them, so the same items are culled.
+bool mayShow(const DisplayItem &item, const RectMm &visible) {
+    if (const Rect *r = std::get_if<Rect>(&item)) {
+        return (r->stroke ? r->box.grown(r->stroke->width_mm / 2) : r->box).intersects(visible);
+    }
+    if (const Line *l = std::get_if<Line>(&item)) {
+        const double left = std::min(l->from.x_mm, l->to.x_mm);
+        const double right = std::max(l->from.x_mm, l->to.x_mm);
+        const double top = std::min(l->from.y_mm, l->to.y_mm);
+        const double bottom = std::max(l->from.y_mm, l->to.y_mm);
+        return RectMm{left, top, right - left, bottom - top}
+            .grown(l->stroke.width_mm / 2)
+            .intersects(visible);
+    }
+    return itemBounds(item).intersects(visible);
+}
+
 } // namespace
 
 PaintStats paintDisplayList(QPainter &painter, const DisplayList &list, const RectMm &visible_mm,
-                            double px_per_mm) {
+                            double px_per_mm, const PaintOptions &options) {
     if (!std::isfinite(px_per_mm) || px_per_mm <= 0.0) {
         throw std::invalid_argument("paintDisplayList: px_per_mm must be positive, got " +
                                     std::to_string(px_per_mm));
@@ -198,8 +237,10 @@ PaintStats paintDisplayList(QPainter &painter, const DisplayList &list, const Re
     painter.setRenderHint(QPainter::TextAntialiasing, true);
     painter.scale(px_per_mm, px_per_mm);
     painter.translate(-visible_mm.left_mm, -visible_mm.top_mm);
+    FillPatternTileBrushes patterns(painter, options.patterns == PatternRendering::Automatic);
+    const StrokesAsFills strokes_as_fills(painter, options.strokes_as_fills);
     for (const DisplayItem &item : list.items()) {
-        if (!itemBounds(item).intersects(visible_mm)) {
+        if (!mayShow(item, visible_mm)) {
             ++stats.culled;
             continue;
         }
@@ -210,9 +251,9 @@ PaintStats paintDisplayList(QPainter &painter, const DisplayList &list, const Re
             [&](const auto &i) {
                 using T = std::decay_t<decltype(i)>;
                 if constexpr (std::is_same_v<T, Rect>) {
-                    paintRect(painter, i);
+                    paintRect(painter, i, patterns, strokes_as_fills);
                 } else if constexpr (std::is_same_v<T, Line>) {
-                    paintLine(painter, i);
+                    paintLine(painter, i, strokes_as_fills);
                 } else if constexpr (std::is_same_v<T, Polyline>) {
                     paintPolyline(painter, i);
                 } else if constexpr (std::is_same_v<T, Polygon>) {

@@ -2,6 +2,7 @@
 // FGDC-STD-013-2006 section 37 (checked against a copy of the standard's pattern
 // chart); the line work follows the standard's style but is drawn from memory, so the checks
 // test the trait that tells each pattern apart, not a copy of the chart.
+#include "draw/fill_pattern_painter.hpp"
 #include "draw/paint_display_list.hpp"
 
 #include <catch2/catch.hpp>
@@ -115,28 +116,75 @@ TEST_CASE("Gravel, basalt and tuff patterns differ from each other and from sand
 TEST_CASE("Patterns are anchored at the scene origin, so touching boxes continue",
           "[draw][pattern]") {
     // Two boxes side by side paint the same pixels as one box covering both (away from the
-    // shared edge, where anti-aliasing of the two clips may differ by a pixel).
-    for (const FillPattern p : {FillPattern::Dolostone, FillPattern::Sand, FillPattern::Clay,
-                                FillPattern::Gravel, FillPattern::Basalt}) {
-        CAPTURE(static_cast<int>(p));
-        const QImage whole = paintPattern(p, {0, 0, 20, 10}, {0, 0, 20, 10});
-        DisplayList halves;
-        halves.add(Rect{{0, 0, 7.3, 10}, std::nullopt, p, std::nullopt, {}});
-        halves.add(Rect{{7.3, 0, 12.7, 10}, std::nullopt, p, std::nullopt, {}});
-        QImage split(200, 100, QImage::Format_RGB32);
-        split.fill(Qt::white);
-        {
-            QPainter painter(&split);
-            paintDisplayList(painter, halves, {0, 0, 20, 10}, kPxPerMm);
-        }
-        int differing = 0;
-        for (int y = 0; y < 100; ++y) {
-            for (int x = 0; x < 200; ++x) {
-                if (std::abs(x - 73) > 1 && whole.pixel(x, y) != split.pixel(x, y)) {
-                    ++differing;
+    // shared edge, where anti-aliasing of the two clips may differ by a pixel): as line work and
+    // from raster tiles (what a QImage gets by default).
+    for (const PatternRendering rendering :
+         {PatternRendering::LineWork, PatternRendering::Automatic}) {
+        for (const FillPattern p : {FillPattern::Dolostone, FillPattern::Sand, FillPattern::Clay,
+                                    FillPattern::Gravel, FillPattern::Basalt}) {
+            CAPTURE(static_cast<int>(rendering), static_cast<int>(p));
+            DisplayList whole_list;
+            whole_list.add(Rect{{0, 0, 20, 10}, std::nullopt, p, std::nullopt, {}});
+            DisplayList halves;
+            halves.add(Rect{{0, 0, 7.3, 10}, std::nullopt, p, std::nullopt, {}});
+            halves.add(Rect{{7.3, 0, 12.7, 10}, std::nullopt, p, std::nullopt, {}});
+            QImage whole(200, 100, QImage::Format_RGB32);
+            QImage split(200, 100, QImage::Format_RGB32);
+            whole.fill(Qt::white);
+            split.fill(Qt::white);
+            {
+                QPainter painter(&whole);
+                paintDisplayList(painter, whole_list, {0, 0, 20, 10}, kPxPerMm, {rendering});
+            }
+            {
+                QPainter painter(&split);
+                paintDisplayList(painter, halves, {0, 0, 20, 10}, kPxPerMm, {rendering});
+            }
+            int differing = 0;
+            for (int y = 0; y < 100; ++y) {
+                for (int x = 0; x < 200; ++x) {
+                    if (std::abs(x - 73) > 1 && whole.pixel(x, y) != split.pixel(x, y)) {
+                        ++differing;
+                    }
                 }
             }
+            CHECK(differing == 0);
         }
-        CHECK(differing == 0);
+    }
+}
+
+TEST_CASE("Stippled patterns repeat with their stated period", "[draw][pattern]") {
+    // Sand, gravel and tuff place their dots and rings by a hash of the cell, taken modulo the
+    // pattern's period, so that a raster tile of one period repeats them exactly. The line work
+    // one period away must be the same pixels (10 px per mm: every period is whole pixels).
+    for (const FillPattern p : {FillPattern::Sand, FillPattern::Gravel, FillPattern::Volcaniclastic,
+                                FillPattern::Limestone, FillPattern::ReefFramework}) {
+        CAPTURE(static_cast<int>(p));
+        const PeriodMm period = fillPatternPeriod(p);
+        const RectMm area{0, 0, 12, 12};
+        const RectMm one_period_on{period.x_mm, period.y_mm, 12, 12};
+        DisplayList list;
+        list.add(Rect{{-1, -1, 80, 80}, std::nullopt, p, std::nullopt, {}});
+        QImage here(120, 120, QImage::Format_RGB32), there(120, 120, QImage::Format_RGB32);
+        here.fill(Qt::white);
+        there.fill(Qt::white);
+        {
+            QPainter painter(&here);
+            paintDisplayList(painter, list, area, kPxPerMm, {PatternRendering::LineWork});
+        }
+        {
+            QPainter painter(&there);
+            paintDisplayList(painter, list, one_period_on, kPxPerMm, {PatternRendering::LineWork});
+        }
+        CHECK(here == there);
+        // Half a period on is not the same (the period is not shorter than stated).
+        const RectMm half_on{period.x_mm / 2, 0, 12, 12};
+        QImage half(120, 120, QImage::Format_RGB32);
+        half.fill(Qt::white);
+        {
+            QPainter painter(&half);
+            paintDisplayList(painter, list, half_on, kPxPerMm, {PatternRendering::LineWork});
+        }
+        CHECK(here != half);
     }
 }
