@@ -4,6 +4,7 @@
 
 #include <catch2/catch.hpp>
 
+#include <set>
 #include <string>
 #include <variant>
 #include <vector>
@@ -33,6 +34,15 @@ const T &onlyItem(const DisplayList &list, ItemRole role, const std::string &key
     }
     REQUIRE(found != nullptr);
     return *found;
+}
+
+/// The texts of every legend row (the legend lists what is drawn, and only that).
+inline std::set<std::string> legendTexts(const DisplayList &list) {
+    std::set<std::string> out;
+    for (const Text *t : itemsOf<Text>(list, ItemRole::LegendText)) {
+        out.insert(t->text);
+    }
+    return out;
 }
 
 } // namespace atollog::draw::test

@@ -16,21 +16,10 @@
 
 using namespace atollog::draw;
 using atollog::draw::test::itemsOf;
+using atollog::draw::test::legendTexts;
 using atollog::draw::test::onlyItem;
 using atollog::draw::test::sampleHoleColumn;
 using atollog::draw::test::testOutputDir;
-
-namespace {
-
-std::set<std::string> legendTexts(const DisplayList &list) {
-    std::set<std::string> out;
-    for (const Text *t : itemsOf<Text>(list, ItemRole::LegendText)) {
-        out.insert(t->text);
-    }
-    return out;
-}
-
-} // namespace
 
 TEST_CASE("Column lists one box per interval, one tick per sample, boxes per run",
           "[draw][column]") {

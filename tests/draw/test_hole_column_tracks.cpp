@@ -16,6 +16,7 @@
 
 using namespace atollog::draw;
 using atollog::draw::test::itemsOf;
+using atollog::draw::test::legendTexts;
 using atollog::draw::test::onlyItem;
 using atollog::draw::test::sampleColumnWithTracks;
 using atollog::draw::test::sampleHoleColumn;
@@ -49,14 +50,6 @@ std::set<std::string> keysOf(const DisplayList &list, ItemRole role) {
         keys.insert(itemTag(*item).key);
     }
     return keys;
-}
-
-std::set<std::string> legendTexts(const DisplayList &list) {
-    std::set<std::string> out;
-    for (const Text *t : itemsOf<Text>(list, ItemRole::LegendText)) {
-        out.insert(t->text);
-    }
-    return out;
 }
 
 } // namespace

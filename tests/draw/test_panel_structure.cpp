@@ -16,6 +16,7 @@
 
 using namespace atollog::draw;
 using atollog::draw::test::itemsOf;
+using atollog::draw::test::legendTexts;
 using atollog::draw::test::samplePanel;
 using atollog::draw::test::samplePanelView;
 using atollog::draw::test::testOutputDir;
@@ -38,14 +39,6 @@ std::size_t lastIndex(const DisplayList &list, ItemRole role) {
         last = itemTag(list.items()[i]).role == role ? i : last;
     }
     return last;
-}
-
-std::set<std::string> legendTexts(const DisplayList &list) {
-    std::set<std::string> out;
-    for (const Text *t : itemsOf<Text>(list, ItemRole::LegendText)) {
-        out.insert(t->text);
-    }
-    return out;
 }
 
 } // namespace
