@@ -149,9 +149,20 @@ draw::PanelInput panelInputFromDataset(const CoreDataset& data, const PanelSourc
     // Each hole's model once: for its isochrons and its age track.
     std::vector<std::pair<std::size_t, AgeModel>> models;
     if (!o.ages_ma.empty() || o.age_model) {
-        for (const auto& hm : gatherAgeModelInputs(data, o.model, ""))
-            if (const auto it = column_of.find(hm.hole); it != column_of.end())
-                models.emplace_back(it->second, buildHoleModel(hm, o.model));
+        for (const auto& [hole, model] : o.ready_models)
+            if (const auto it = column_of.find(hole); it != column_of.end())
+                models.emplace_back(it->second, model);
+        // The rest are built; their inputs are only gathered when some hole needs them.
+        const bool all_ready = std::all_of(column_of.begin(), column_of.end(), [&](const auto& c) {
+            return o.ready_models.count(c.first) > 0;
+        });
+        if (!all_ready)
+            for (const auto& hm : gatherAgeModelInputs(data, o.model, ""))
+                if (const auto it = column_of.find(hm.hole);
+                    it != column_of.end() && o.ready_models.count(hm.hole) == 0)
+                    models.emplace_back(it->second, buildHoleModel(hm, o.model));
+        std::sort(models.begin(), models.end(),
+                  [](const auto& a, const auto& b) { return a.first < b.first; });
     }
     if (o.age_model)
         for (const auto& [column, m] : models) in.columns[column].age_model = columnAgeModel(m);

@@ -10,6 +10,7 @@
 
 #include "atollog/engine/core_dataset.hpp"
 
+#include <map>
 #include <string>
 #include <vector>
 
@@ -31,6 +32,9 @@ struct PanelSourceOptions {
     bool dates = false;     ///< dates in the age track
     bool age_model = false; ///< each hole's age model in the age track
     draw::HoleColumnTracks tracks; ///< what every column shows
+    /// Per hole: a model already run (e.g. stored in the project, stored_age_models.hpp), used
+    /// for its isochrons and age track instead of building one with `model`.
+    std::map<std::string, AgeModel> ready_models;
 };
 
 /// Throws std::invalid_argument naming an unknown hole, event, taxon or zonation scheme, as the

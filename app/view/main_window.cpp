@@ -196,6 +196,7 @@ bool MainWindow::openProject(const QString &path) {
         setWindowTitle(tr("%1 - atollog-view").arg(QFileInfo(path).fileName()));
         QSettings().setValue(kLastProjectKey, project_path_);
         showPanel(std::move(panel.full), choice);
+        statusBar()->showMessage(QString::fromStdString(modelSourceLine(panel)));
         return true;
     } catch (...) {
         QApplication::restoreOverrideCursor();

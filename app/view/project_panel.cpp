@@ -2,6 +2,7 @@
 
 #include "cli/correlation_inputs.hpp"
 #include "cli/panel_source.hpp"
+#include "cli/stored_age_models.hpp"
 
 #include "atollog/db/project_store.hpp"
 
@@ -48,11 +49,35 @@ std::vector<std::string> spread(const std::vector<std::string> &all, std::size_t
 
 } // namespace
 
+std::string modelSourceLine(const ProjectPanel &panel) {
+    const auto joined = [](const std::vector<std::string> &parts) {
+        std::string s;
+        for (const std::string &p : parts) {
+            s += (s.empty() ? "" : ", ") + p;
+        }
+        return s;
+    };
+    std::string line;
+    if (!panel.model_sources.empty()) {
+        line = "Age models stored in the project: " + joined(panel.model_sources) + ".";
+    }
+    if (!panel.holes_with_default_models.empty()) {
+        line += (line.empty() ? "" : " ") + std::string("No fresh stored run, so built with default "
+                                                        "settings where the data allow: ") +
+                joined(panel.holes_with_default_models) + ".";
+    }
+    return line;
+}
+
 ProjectPanel loadProjectPanel(const std::filesystem::path &project) {
-    const auto store = db::ProjectStore::open(project);
+    auto store = db::ProjectStore::open(project);
     const CoreDataset data = store.loadDataset();
 
     cli::PanelSourceOptions options;
+    // The age models the user ran and stored (with their own settings) when they are fresh;
+    // the other holes' models are built with default settings.
+    cli::StoredModelChoice stored = cli::latestStoredAgeModels(store, data);
+    options.ready_models = std::move(stored.models);
     options.title = project.stem().string();
     // The models give the same bits on any thread count (DEVELOPERS.md), so use the machine.
     options.model.threads = static_cast<int>(std::max(1u, std::thread::hardware_concurrency()));
@@ -88,6 +113,12 @@ ProjectPanel loadProjectPanel(const std::filesystem::path &project) {
     options.age_model = true;
 
     ProjectPanel out;
+    out.model_sources = std::move(stored.sources);
+    for (const Hole &h : data.holes) {
+        if (options.ready_models.count(h.hole) == 0) {
+            out.holes_with_default_models.push_back(h.hole);
+        }
+    }
     out.full = cli::panelInputFromDataset(data, options);
     out.default_events = spread(in_every_hole.empty() ? options.events : in_every_hole, 5);
     std::vector<std::string> labels;
