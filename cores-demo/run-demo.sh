@@ -60,6 +60,11 @@ run panel "$project" "${model[@]}" --out build/demo-panel.png --scale 1000 \
     --taxa CONV-MIN,LEPT-TEN,OPKA-GRA \
     --tracks runs,lithology,surfaces,samples,taxa,zones,dates,model \
     --zone-scheme "VL larger benthic foraminifera"
+# The same holes on an age axis: each column through its age model, so equal ages stand level and
+# the time of each exposure surface opens as a grey gap.
+run panel "$project" "${model[@]}" --out build/demo-panel-age.png --scale 1000 \
+    --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --ages-ma 0.125,1.0 \
+    --tracks runs,lithology,surfaces,samples,dates,model --axis age
 run panel "$project" "${model[@]}" --out build/demo-panel-flat.svg --scale 1000 \
     --events "B CONV-MIN,T LEPT-TEN,B OPKA-GRA" --axis elevation --flatten "T LEPT-TEN"
 run history "$project"
