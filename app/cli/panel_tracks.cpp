@@ -12,19 +12,6 @@ namespace atollog::cli {
 
 namespace {
 
-/// Whether an in-place occurrence counts for the range under the settings' abundance threshold:
-/// the rule BiostratSettings documents (and observeRanges applies; the engine keeps its own
-/// copy internal): a class at or above the class threshold, a count at or above the count
-/// threshold, a form without a threshold passes, no abundance fails once a threshold is set.
-bool countsForRange(const Occurrence& o, const BiostratSettings& s) {
-    if (!s.abundanceThresholdActive()) return true;
-    if (!o.abundance) return false;
-    if (const auto* cls = std::get_if<AbundanceClass>(&*o.abundance))
-        return !s.min_abundance_class ||
-               static_cast<int>(*cls) >= static_cast<int>(*s.min_abundance_class);
-    return !s.min_abundance_count || std::get<std::int64_t>(*o.abundance) >= *s.min_abundance_count;
-}
-
 std::vector<double> levels(const std::vector<SampleLevel>& samples) {
     std::vector<double> out;
     for (const SampleLevel& s : samples) out.push_back(s.top_m);
@@ -53,7 +40,7 @@ void addTaxonLanes(std::vector<draw::HoleColumnInput>& columns, const CoreDatase
                 if (o.taxon != id || o.status != OccurrenceStatus::InPlace) continue;
                 const auto s = sample_of.find(o.sample);
                 if (s == sample_of.end() || s->second->hole != c.hole) continue;
-                if (countsForRange(o, settings)) lane.finds_m.push_back(s->second->top_m);
+                if (passesAbundanceThreshold(o, settings)) lane.finds_m.push_back(s->second->top_m);
             }
             for (const ObservedRange& r : ranges)
                 if (r.hole == c.hole && r.taxon == id) {

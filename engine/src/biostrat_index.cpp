@@ -6,6 +6,21 @@
 #include <cmath>
 #include <stdexcept>
 
+namespace atollog {
+
+bool passesAbundanceThreshold(const Occurrence& o, const BiostratSettings& s) {
+    if (!s.abundanceThresholdActive())
+        return true;
+    if (!o.abundance)
+        return false; // nothing shows it reaches the threshold
+    if (const auto* cls = std::get_if<AbundanceClass>(&*o.abundance))
+        return !s.min_abundance_class || static_cast<int>(*cls) >= static_cast<int>(*s.min_abundance_class);
+    const std::int64_t count = std::get<std::int64_t>(*o.abundance);
+    return !s.min_abundance_count || count >= *s.min_abundance_count;
+}
+
+} // namespace atollog
+
 namespace atollog::detail {
 namespace {
 
@@ -29,17 +44,6 @@ void requireUsableSample(const Sample& s) {
 } // namespace
 
 bool isBarrenKind(const std::string& kind) { return kind == "barren"; }
-
-bool passesAbundanceThreshold(const Occurrence& o, const BiostratSettings& s) {
-    if (!s.abundanceThresholdActive())
-        return true;
-    if (!o.abundance)
-        return false; // nothing shows it reaches the threshold
-    if (const auto* cls = std::get_if<AbundanceClass>(&*o.abundance))
-        return !s.min_abundance_class || static_cast<int>(*cls) >= static_cast<int>(*s.min_abundance_class);
-    const std::int64_t count = std::get<std::int64_t>(*o.abundance);
-    return !s.min_abundance_count || count >= *s.min_abundance_count;
-}
 
 BiostratIndex::BiostratIndex(const CoreDataset& data, const BiostratSettings& settings)
     : data_(data) {

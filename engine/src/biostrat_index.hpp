@@ -1,6 +1,7 @@
 #pragma once
 // Private to the engine: the occurrences of a dataset indexed once by hole and taxon, with each
 // hole's examined samples in depth order, so that ranges and picks cost O(N log N) in all.
+#include "atollog/engine/observed_ranges.hpp" // passesAbundanceThreshold
 #include "atollog/engine/biostrat_settings.hpp"
 #include "atollog/engine/core_dataset.hpp"
 #include "atollog/engine/depth_model.hpp"
@@ -52,10 +53,6 @@ class BiostratIndex {
     std::vector<TaxonInHole> taxa_in_holes_; ///< by hole, then by first occurrence in the data
     std::unordered_map<std::string, std::size_t> lookup_; ///< hole index + '\n' + taxon
 };
-
-/// Whether an in-place occurrence counts under the abundance threshold (rule in
-/// BiostratSettings).
-bool passesAbundanceThreshold(const Occurrence& o, const BiostratSettings& s);
 
 /// Distinct sampled levels (sample top_m) among the taxon's counted samples.
 int countHorizons(const BiostratIndex& index, const TaxonInHole& t);

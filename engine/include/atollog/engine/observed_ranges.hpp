@@ -36,6 +36,12 @@ struct ObservedRange {
     double length_m() const { return highest && lowest ? lowest->top_m - highest->top_m : 0.0; }
 };
 
+/// Whether an in-place occurrence counts for a range under the settings' abundance threshold
+/// (the rule in BiostratSettings): with no threshold every one counts; a class at or above the
+/// class threshold, a count at or above the count threshold; an abundance of the other form
+/// passes; no abundance fails once a threshold is set.
+bool passesAbundanceThreshold(const Occurrence& o, const BiostratSettings& s);
+
 /// Every taxon with at least one occurrence (any status) in every hole, holes in dataset order,
 /// taxa by first occurrence in the data. Throws std::invalid_argument on unusable input (unknown
 /// hole or sample, duplicate sample id, non-finite or inverted depths, negative counts, bad
