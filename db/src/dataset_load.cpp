@@ -90,9 +90,11 @@ const std::string& textId(const TextIds& ids, std::int64_t id, std::string_view 
 // in order for attaching free attributes.
 template <class Row, class ReadRow>
 std::vector<std::int64_t> loadRows(SQLite::Database& db, const std::string& sql,
-                                   std::vector<Row>& rows, ReadRow readRow) {
+                                   std::vector<Row>& rows, ReadRow readRow,
+                                   const std::vector<std::int64_t>& binds = {}) {
     std::vector<std::int64_t> ids;
     SQLite::Statement query(db, sql);
+    for (std::size_t i = 0; i < binds.size(); ++i) query.bind(static_cast<int>(i + 1), binds[i]);
     while (query.executeStep()) {
         const std::int64_t id = query.getColumn(0).getInt64();
         ids.push_back(id);
@@ -105,9 +107,11 @@ std::vector<std::int64_t> loadRows(SQLite::Database& db, const std::string& sql,
     return ids;
 }
 
+// `subset`: `ids` are some of the table's rows (a scoped load); attributes of the others are
+// skipped instead of being reported as dangling.
 template <class Row>
 void attachFreeAttributes(SQLite::Database& db, Table table, const std::vector<std::int64_t>& ids,
-                          std::vector<Row>& rows) {
+                          std::vector<Row>& rows, bool subset = false) {
     SQLite::Statement query(db, "SELECT row_id, col, value FROM free_attribute WHERE tbl = ?"
                                 " ORDER BY id");
     const std::string tbl(sqlTableName(table));
@@ -117,6 +121,7 @@ void attachFreeAttributes(SQLite::Database& db, Table table, const std::vector<s
         // ids are ascending (loaded ORDER BY id), so a binary search finds the row.
         const auto it = std::lower_bound(ids.begin(), ids.end(), row_id);
         if (it == ids.end() || *it != row_id) {
+            if (subset) continue;
             badContent("free_attribute", row_id, "row_id refers to no row of " + tbl);
         }
         rows[static_cast<std::size_t>(it - ids.begin())].extra.emplace_back(
@@ -126,8 +131,67 @@ void attachFreeAttributes(SQLite::Database& db, Table table, const std::vector<s
 
 } // namespace
 
-CoreDataset loadDatasetRows(SQLite::Database& db) {
+CoreDataset loadDatasetRows(SQLite::Database& db) { return loadDatasetRows(db, nullptr, nullptr); }
+
+namespace {
+
+// A scoped query: `select` plus " WHERE " + `where` with each "@" a list of bound ids ("NULL"
+// when empty), or `select` alone without a scope. Ids are bound, never formatted in.
+struct ScopedQuery {
+    std::string sql;
+    std::vector<std::int64_t> binds;
+};
+ScopedQuery scopedQuery(std::string select, const LoadScope* scope, std::string_view where,
+                        const std::vector<const std::vector<std::int64_t>*>& lists) {
+    ScopedQuery q{std::move(select), {}};
+    if (scope) {
+        q.sql += " WHERE ";
+        std::size_t next = 0;
+        for (char c : where) {
+            if (c != '@') {
+                q.sql += c;
+                continue;
+            }
+            const std::vector<std::int64_t>& ids = *lists.at(next++);
+            for (std::size_t i = 0; i < ids.size(); ++i) q.sql += i ? ",?" : "?";
+            if (ids.empty()) q.sql += "NULL";
+            q.binds.insert(q.binds.end(), ids.begin(), ids.end());
+        }
+    }
+    q.sql += " ORDER BY id";
+    return q;
+}
+
+} // namespace
+
+CoreDataset loadDatasetRows(SQLite::Database& db, const LoadScope* scope,
+                            DatasetRowIds* row_ids) {
     CoreDataset data;
+    const std::vector<std::int64_t>* holes = scope ? &scope->hole_ids : nullptr;
+    const std::vector<std::int64_t>* runs = scope ? &scope->run_ids : nullptr;
+    const std::vector<std::int64_t>* samples = scope ? &scope->sample_ids : nullptr;
+    const ScopedQuery run_query = scopedQuery(
+        "SELECT id, hole_id, run, top_m, base_m, recovered_m FROM core_run", scope,
+        "hole_id IN (@) OR id IN (@)", {holes, runs});
+    const ScopedQuery interval_query = scopedQuery(
+        "SELECT id, hole_id, top_m, base_m, rock, texture, mud_supported, grains_pct,"
+        " coarse_pct, binding, base_surface, paleodepth_min_m, paleodepth_max_m,"
+        " dry_density_g_cm3, porosity_pct, caco3_pct, notes FROM lith_interval",
+        scope, "hole_id IN (@)", {holes});
+    const ScopedQuery sample_query = scopedQuery(
+        "SELECT id, hole_id, sample, top_m, base_m, kind FROM sample", scope,
+        "hole_id IN (@) OR id IN (@) OR id IN (SELECT sample_id FROM numerical_date"
+        " WHERE hole_id IN (@))",
+        {holes, samples, holes});
+    const ScopedQuery occurrence_query = scopedQuery(
+        "SELECT id, sample_id, taxon_id, abundance_class, abundance_count, status"
+        " FROM occurrence",
+        scope, "sample_id IN (@)", {samples});
+    const ScopedQuery date_query = scopedQuery(
+        "SELECT id, hole_id, sample_id, depth_m, method, age_ma, age_sd_ma, th230_u238_act,"
+        " th230_u238_act_sd, u234_u238_act, u234_u238_act_sd, th232_ppb, u238_ppb, f14c,"
+        " f14c_sd, delta_r_yr, delta_r_sd_yr FROM numerical_date",
+        scope, "hole_id IN (@)", {holes});
     TextIds hole_text, sample_text, taxon_text, event_text;
 
     const auto hole_ids = loadRows(
@@ -146,8 +210,7 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             return h;
         });
     const auto run_ids = loadRows(
-        db, "SELECT id, hole_id, run, top_m, base_m, recovered_m FROM core_run ORDER BY id",
-        data.runs, [&](SQLite::Statement& q, std::int64_t id) {
+        db, run_query.sql, data.runs, [&](SQLite::Statement& q, std::int64_t id) {
             CoreRun r;
             r.hole = textId(hole_text, q.getColumn(1).getInt64(), "core_run", id, "hole_id");
             r.run = q.getColumn(2).getString();
@@ -155,11 +218,10 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             r.base_m = real(q.getColumn(4));
             r.recovered_m = real(q.getColumn(5));
             return r;
-        });
+        },
+        run_query.binds);
     const auto interval_ids = loadRows(
-        db, "SELECT id, hole_id, top_m, base_m, rock, texture, mud_supported, grains_pct,"
-            " coarse_pct, binding, base_surface, paleodepth_min_m, paleodepth_max_m,"
-            " dry_density_g_cm3, porosity_pct, caco3_pct, notes FROM lith_interval ORDER BY id",
+        db, interval_query.sql,
         data.intervals, [&](SQLite::Statement& q, std::int64_t id) {
             LithInterval l;
             l.hole = textId(hole_text, q.getColumn(1).getInt64(), "lith_interval", id, "hole_id");
@@ -182,10 +244,10 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             l.caco3_pct = optionalReal(q.getColumn(15));
             l.notes = optionalText(q.getColumn(16));
             return l;
-        });
+        },
+        interval_query.binds);
     const auto sample_ids = loadRows(
-        db, "SELECT id, hole_id, sample, top_m, base_m, kind FROM sample ORDER BY id",
-        data.samples, [&](SQLite::Statement& q, std::int64_t id) {
+        db, sample_query.sql, data.samples, [&](SQLite::Statement& q, std::int64_t id) {
             Sample s;
             s.hole = textId(hole_text, q.getColumn(1).getInt64(), "sample", id, "hole_id");
             s.sample = q.getColumn(2).getString();
@@ -194,7 +256,8 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             s.kind = optionalText(q.getColumn(5));
             sample_text.emplace(id, s.sample);
             return s;
-        });
+        },
+        sample_query.binds);
     const auto taxon_ids = loadRows(
         db, "SELECT id, taxon, name, taxon_group FROM taxon ORDER BY id", data.taxa,
         [&](SQLite::Statement& q, std::int64_t id) {
@@ -205,10 +268,11 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             taxon_text.emplace(id, t.taxon);
             return t;
         });
-    data.occurrences.reserve(static_cast<std::size_t>(countRows(db, Table::Occurrences)));
+    if (!scope) {
+        data.occurrences.reserve(static_cast<std::size_t>(countRows(db, Table::Occurrences)));
+    }
     const auto occurrence_ids = loadRows(
-        db, "SELECT id, sample_id, taxon_id, abundance_class, abundance_count, status"
-            " FROM occurrence ORDER BY id",
+        db, occurrence_query.sql,
         data.occurrences, [&](SQLite::Statement& q, std::int64_t id) {
             Occurrence o;
             o.sample = textId(sample_text, q.getColumn(1).getInt64(), "occurrence", id,
@@ -223,7 +287,8 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             o.status = parseWord<OccurrenceStatus>(q.getColumn(5), parseOccurrenceStatus,
                                                    "occurrence", id);
             return o;
-        });
+        },
+        occurrence_query.binds);
     const auto event_ids = loadRows(
         db, "SELECT id, event, taxon_id, kind, age_ma, age_sd_ma, source FROM time_scale_event"
             " ORDER BY id",
@@ -240,9 +305,7 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
             return e;
         });
     const auto date_ids = loadRows(
-        db, "SELECT id, hole_id, sample_id, depth_m, method, age_ma, age_sd_ma, th230_u238_act,"
-            " th230_u238_act_sd, u234_u238_act, u234_u238_act_sd, th232_ppb, u238_ppb, f14c,"
-            " f14c_sd, delta_r_yr, delta_r_sd_yr FROM numerical_date ORDER BY id",
+        db, date_query.sql,
         data.dates, [&](SQLite::Statement& q, std::int64_t id) {
             NumericalDate d;
             d.hole = textId(hole_text, q.getColumn(1).getInt64(), "numerical_date", id, "hole_id");
@@ -274,7 +337,8 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
                 d.c14 = c;
             }
             return d;
-        });
+        },
+        date_query.binds);
     const auto zone_ids = loadRows(
         db, "SELECT id, scheme, zone, base_event_id, top_event_id FROM zone ORDER BY id",
         data.zones, [&](SQLite::Statement& q, std::int64_t id) {
@@ -311,16 +375,21 @@ CoreDataset loadDatasetRows(SQLite::Database& db) {
         });
 
     attachFreeAttributes(db, Table::Holes, hole_ids, data.holes);
-    attachFreeAttributes(db, Table::Runs, run_ids, data.runs);
-    attachFreeAttributes(db, Table::Intervals, interval_ids, data.intervals);
-    attachFreeAttributes(db, Table::Samples, sample_ids, data.samples);
+    const bool subset = scope != nullptr;
+    attachFreeAttributes(db, Table::Runs, run_ids, data.runs, subset);
+    attachFreeAttributes(db, Table::Intervals, interval_ids, data.intervals, subset);
+    attachFreeAttributes(db, Table::Samples, sample_ids, data.samples, subset);
     attachFreeAttributes(db, Table::Taxa, taxon_ids, data.taxa);
-    attachFreeAttributes(db, Table::Occurrences, occurrence_ids, data.occurrences);
+    attachFreeAttributes(db, Table::Occurrences, occurrence_ids, data.occurrences, subset);
     attachFreeAttributes(db, Table::Events, event_ids, data.events);
-    attachFreeAttributes(db, Table::Dates, date_ids, data.dates);
+    attachFreeAttributes(db, Table::Dates, date_ids, data.dates, subset);
     attachFreeAttributes(db, Table::Zones, zone_ids, data.zones);
     attachFreeAttributes(db, Table::SeaLevel, sea_level_ids, data.sea_level);
     attachFreeAttributes(db, Table::Curve, curve_ids, data.curve);
+    if (row_ids) {
+        *row_ids = DatasetRowIds{hole_ids, run_ids, interval_ids, sample_ids, taxon_ids,
+                                 occurrence_ids, event_ids, date_ids, zone_ids};
+    }
     return data;
 }
 

@@ -19,6 +19,23 @@ std::string_view sqlTableName(Table t);
 /// kept out (an unknown word, a dangling reference): the file was edited by another tool.
 CoreDataset loadDatasetRows(SQLite::Database& db);
 
+/// Stored ids (`id` column) of the loaded rows, in the order of the dataset's vectors.
+struct DatasetRowIds {
+    std::vector<std::int64_t> holes, runs, intervals, samples, taxa, occurrences, events, dates,
+        zones;
+};
+/// The rows a scoped load reads (stored ids): the scope a row edit is checked in. Holes, taxa,
+/// events, zones, sea level and curve are always read whole.
+struct LoadScope {
+    std::vector<std::int64_t> hole_ids;   ///< runs, intervals, samples and dates of these holes
+    std::vector<std::int64_t> run_ids;    ///< and these runs
+    std::vector<std::int64_t> sample_ids; ///< and these samples, with their occurrences
+};
+/// As above; with a `scope`, only its rows (and the samples its dates name), with no other
+/// occurrences than those of scope.sample_ids. Fills `row_ids` if given.
+CoreDataset loadDatasetRows(SQLite::Database& db, const LoadScope* scope,
+                            DatasetRowIds* row_ids);
+
 /// Deletes every dataset row (not the model runs).
 void deleteDatasetRows(SQLite::Database& db);
 
