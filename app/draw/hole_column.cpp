@@ -18,6 +18,7 @@
 
 #include <algorithm>
 #include <cstdio>
+#include <stdexcept>
 #include <string>
 
 namespace atollog::draw {
@@ -278,7 +279,16 @@ HoleColumnPlacement appendHoleColumn(DisplayList &list, const HoleColumnInput &i
 DepthScale holeColumnDepthScale(const HoleColumnInput &in, const HoleColumnView &view,
                                 const HoleColumnStyle &s) {
     validateHoleColumnInput(in, view);
-    return DepthScale::fromRatio(depthWindowOf(in, view).top_m, view.scale_ratio,
+    // A kilometre of paper is beyond any page: refuse it before the layout loops over it.
+    const DepthWindow w = depthWindowOf(in, view);
+    if (!((w.base_m - w.top_m) * 1000.0 / view.scale_ratio <= 1e6)) {
+        throw std::invalid_argument("hole column " + in.hole + ": " +
+                                    std::to_string(w.base_m - w.top_m) + " m at 1:" +
+                                    std::to_string(view.scale_ratio) +
+                                    " would take over a kilometre of paper; choose a smaller "
+                                    "scale or a depth window");
+    }
+    return DepthScale::fromRatio(w.top_m, view.scale_ratio,
                                  s.margin_mm + holeColumnHeaderHeight_mm(in, view, s));
 }
 

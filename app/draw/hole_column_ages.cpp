@@ -7,6 +7,8 @@
 #include <cmath>
 #include <cstdio>
 #include <limits>
+#include <stdexcept>
+#include <string>
 
 namespace atollog::draw {
 
@@ -24,8 +26,15 @@ namespace {
 /// The smallest step of the 1-2-5 series that puts at most three multiples in [lo, hi].
 double tickStep(double lo, double hi) {
     const double span = hi - lo;
+    if (!std::isfinite(lo) || !std::isfinite(hi) || !(span > 0.0) || !std::isfinite(span)) {
+        throw std::invalid_argument("age track: the ages to scale (" + std::to_string(lo) +
+                                    " to " + std::to_string(hi) +
+                                    " Ma) are not a finite range; check the dates and the age "
+                                    "model rows of this hole");
+    }
     double decade = std::pow(10.0, std::floor(std::log10(span)) - 2.0);
-    for (;;) {
+    // Three decades up always reach a step above the span, so this ends; bounded anyway.
+    for (int guard = 0; guard < 700; ++guard) {
         for (const double m : {1.0, 2.0, 5.0}) {
             const double step = m * decade;
             const double first = std::ceil(lo / step - 1e-9);
@@ -36,6 +45,8 @@ double tickStep(double lo, double hi) {
         }
         decade *= 10.0;
     }
+    throw std::invalid_argument("age track: no tick step fits the ages " + std::to_string(lo) +
+                                " to " + std::to_string(hi) + " Ma; check the hole's ages");
 }
 
 ColumnAgeRow lerpRow(const ColumnAgeRow &a, const ColumnAgeRow &b, double d) {
@@ -170,8 +181,11 @@ std::optional<AgeTrackScale> ageTrackScale(const HoleColumnInput &in,
     s.left_mm = x.ages_left_mm + ts::kAgeTrackInset_mm;
     s.right_mm = x.ages_right_mm - ts::kAgeTrackInset_mm;
     const double step = tickStep(lo, hi);
-    for (double k = std::ceil(lo / step - 1e-9); k <= std::floor(hi / step + 1e-9); k += 1.0) {
-        s.ticks_ma.push_back(k * step + 0.0); // + 0.0: never a "-0.0" label
+    // Counted, at most three: far from zero, k += 1 would no longer move k.
+    const double first = std::ceil(lo / step - 1e-9);
+    const double last = std::floor(hi / step + 1e-9);
+    for (int i = 0; first + i <= last && i < 3; ++i) {
+        s.ticks_ma.push_back((first + i) * step + 0.0); // + 0.0: never a "-0.0" label
     }
     s.decimals = std::max(0, static_cast<int>(-std::floor(std::log10(step) + 1e-9)));
     return s;

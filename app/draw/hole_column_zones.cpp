@@ -72,6 +72,10 @@ void addName(DisplayList &list, const HoleColumnStyle &s, const RectMm &body,
 
 } // namespace
 
+/// More hatch lines than this in one box (a box tens of metres high at 0.9 mm spacing) means the
+/// page itself is absurd; the layouts refuse such pages, this is the last guard.
+constexpr double kMaxHatchLines = 1e5;
+
 std::vector<Line> hatchLines(const RectMm &box, double spacing_mm, const Stroke &stroke,
                              const ItemTag &tag) {
     std::vector<Line> out;
@@ -81,7 +85,13 @@ std::vector<Line> hatchLines(const RectMm &box, double spacing_mm, const Stroke 
     // Lines x + y = k (y down, so they rise to the right), k on multiples of the spacing.
     const double l = box.left_mm, r = box.right_mm(), t = box.top_mm, b = box.bottom_mm();
     const double k_first = std::ceil((l + t) / spacing_mm) * spacing_mm;
-    for (double k = k_first; k <= r + b; k += spacing_mm) {
+    // Counted, not stepped: at huge coordinates k += spacing would not move k at all.
+    const double count = std::floor((r + b - k_first) / spacing_mm) + 1.0;
+    if (!(count >= 1.0) || count > kMaxHatchLines) {
+        return out; // nothing, or more lines than any page could show apart
+    }
+    for (long i = 0; i < static_cast<long>(count); ++i) {
+        const double k = k_first + static_cast<double>(i) * spacing_mm;
         // Points of x + y = k inside the box: x from max(l, k - b) to min(r, k - t).
         const double x0 = std::max(l, k - b);
         const double x1 = std::min(r, k - t);

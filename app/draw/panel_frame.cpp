@@ -13,6 +13,11 @@ namespace atollog::draw {
 
 namespace ps = panel_style;
 
+/// A kilometre of paper: beyond any plotter, screen or viewer zoom. Values that would need more
+/// (a hole logged to 1e300 m, a scale of 1:1e-300) are refused here, before loops over ticks,
+/// hatches or patterns meet coordinates where adding a step no longer moves them.
+constexpr double kMaxPaper_mm = 1e6;
+
 std::optional<double> flatteningLevel_m(const PanelInput &in, const std::string &name,
                                         std::size_t column) {
     for (const PanelTie &t : in.ties) {
@@ -175,6 +180,14 @@ PanelFrame placePanel(const PanelInput &in, const PanelView &view, double title_
                                     " on this axis); give both window ends, the base below the top");
     }
 
+    const double height_mm = (f.axis_base_m - f.axis_top_m) * f.mm_per_axis_unit;
+    if (!(height_mm <= kMaxPaper_mm)) {
+        throw std::invalid_argument(
+            "correlation panel: the axis from " + std::to_string(f.axis_top_m) + " to " +
+            std::to_string(f.axis_base_m) + " would take " + std::to_string(height_mm / 1000.0) +
+            " m of paper at this scale; choose a smaller scale or a window");
+    }
+
     // Columns left to right after the shared axis, column_gap_mm between their edges.
     f.axis_x_mm = ps::kMargin_mm + ps::kAxisWidth_mm;
     double left = f.axis_x_mm + ps::kAxisToColumns_mm;
@@ -207,6 +220,12 @@ PanelFrame placePanel(const PanelInput &in, const PanelView &view, double title_
         }
         const bool note = col.has_note || col.no_age_model;
         highest_rel = std::min(highest_rel, body_rel - col.header_height_mm - (note ? note_h : 0.0));
+    }
+    if (!(left <= kMaxPaper_mm)) {
+        throw std::invalid_argument("correlation panel: the columns would take " +
+                                    std::to_string(left / 1000.0) +
+                                    " m of paper side by side; check column_gap_mm (" +
+                                    std::to_string(view.column_gap_mm) + " mm)");
     }
     f.title_top_mm = ps::kMargin_mm;
     f.axis_origin_y_mm = ps::kMargin_mm + title_height_mm + ps::kTitleToColumns_mm - highest_rel;
