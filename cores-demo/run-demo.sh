@@ -31,6 +31,7 @@ run chart "$project" --hole TOR1 --extend 0.95 --page a4 --out build/demo-range-
 # Numerical dates (U-Th from activity ratios, radiocarbon calibrated) and the chain's migration.
 run dates "$project"
 run chain "$project"
+run chain "$project" --plot build/demo-chain.png >/dev/null
 # Age-depth models (stored with their seed), accretion rates and subsidence. Ties over the 95 %
 # range-extended brackets; the collars stand on emerged reef flats, so the core top is open
 # (no younger than today, no older than the shallowest tie).
@@ -41,7 +42,12 @@ for hole in KAL1 TOR1 OSS1 PEL1; do
     run age "$project" "${model[@]}" --hole "$hole" --plot "build/demo-age-depth-$hole.png" >/dev/null
 done
 run rates "$project" "${model[@]}" --porosity-law 0.5,2000
+for along in depth age; do
+    run rates "$project" "${model[@]}" --hole TOR1 --plot "build/demo-rates-$along-TOR1.png" \
+        --plot-along "$along" >/dev/null
+done
 run subsidence "$project" "${model[@]}" --per-hole
+run subsidence "$project" "${model[@]}" --plot build/demo-subsidence.png >/dev/null
 run subsidence "$project" "${model[@]}" --hole PEL1 --plate-age-ma 60
 # Correlation between holes: contradictions, the composite sequence (stored with its seed), a
 # line of correlation, isochrons and an event's tie line.
@@ -49,6 +55,7 @@ run order "$project"
 run sequence "$project" --seed 730117
 run sequence "$project" --seed 730117 --by extension --no-store
 run line "$project" --hole OSS1 --with PEL1
+run line "$project" --hole OSS1 --with PEL1 --plot build/demo-line-OSS1-PEL1.png >/dev/null
 run line "$project" --hole OSS1 --with PEL1 --by segment
 run line "$project" --hole PEL1 --composite --by segment
 run isochrons "$project" "${model[@]}" --ages-ma 0.125,0.45,1.0 --events "B CONV-MIN"

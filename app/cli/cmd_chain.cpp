@@ -1,11 +1,14 @@
 // `chain`: how fast the plate carries the islands away from the active volcanic centre, from
 // each hole's basement age against its distance along the chain (York et al. 2004).
 #include "cli/command.hpp"
+#include "cli/figure_file.hpp"
+#include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
 
 #include "atollog/db/project_store.hpp"
 #include "atollog/engine/chain_migration.hpp"
+#include "draw/chain_plot.hpp"
 
 #include <filesystem>
 #include <memory>
@@ -22,6 +25,7 @@ CommandRun addChainCommand(CLI::App& app, const CommandIo& io) {
         double distance_sd_km = kDefaultChainDistanceSdKm;
         bool points = false;
         bool csv = false;
+        fs::path plot;
     };
     auto o = std::make_shared<Options>();
     auto* sub = app.add_subcommand(
@@ -35,7 +39,11 @@ CommandRun addChainCommand(CLI::App& app, const CommandIo& io) {
         ->capture_default_str();
     sub->add_flag("--points", o->points, "Print the basement age of each hole instead of the fit");
     sub->add_flag("--csv", o->csv, "Print CSV instead of an aligned table");
+    sub->add_option("--plot", o->plot,
+                    "Draw basement age against distance with the fitted line to this .svg, .png "
+                    "or .pdf");
     return [o, &io]() {
+        if (!o->plot.empty()) figureFormatOf(o->plot, "--plot");
         const auto store = db::ProjectStore::open(o->project);
         const auto points = basementAgesFromDataset(store.loadDataset(), o->distance_sd_km);
         using A = TablePrinter::Align;
@@ -75,6 +83,19 @@ CommandRun addChainCommand(CLI::App& app, const CommandIo& io) {
             io.out << '\n';
         }
         table.print(io.out, csv);
+        if (!o->plot.empty()) {
+            draw::ChainPlotInput plot;
+            plot.note = "basement: the oldest Ar-Ar or K-Ar date in a volcanic interval of each "
+                        "hole; bars: 95 % (1.96 sd)";
+            for (const auto& p : points)
+                plot.points.push_back({p.hole, p.distance_km, p.distance_sd_km, p.age_ma, p.age_sd_ma});
+            plot.fit = draw::ChainPlotFit{fit.intercept_ma, fit.york.slope, *fit.rate_km_per_myr,
+                                          *fit.rate_sd_km_per_myr, "York fit"};
+            ensureGuiApplication();
+            writeFigure(draw::layoutChainPlot(plot), o->plot, "--plot",
+                        "Age against distance along the chain", 200, draw::PdfPageSize::FitChart);
+            (csv ? io.err : io.out) << "drew age against distance to " << o->plot.string() << '\n';
+        }
         return int(kOk);
     };
 }

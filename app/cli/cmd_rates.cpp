@@ -2,6 +2,8 @@
 // per reef package, with decompacted rates and mass and carbonate accumulation where logged.
 #include "cli/age_model_inputs.hpp"
 #include "cli/command.hpp"
+#include "cli/figure_file.hpp"
+#include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
 
@@ -9,6 +11,7 @@
 #include "atollog/engine/accumulation.hpp"
 #include "atollog/engine/decompaction.hpp"
 #include "atollog/engine/rate_units.hpp"
+#include "draw/rate_plot.hpp"
 
 #include <filesystem>
 #include <memory>
@@ -52,6 +55,24 @@ PorosityLaw parseLaw(const std::string& text) {
     return law;
 }
 
+/// The rate plot's interval for one rate, along depth or along the model's median ages (empty
+/// when the model has no age at an end or the ages do not increase).
+std::optional<draw::RatePlotInterval> plotInterval(const AccretionRate& r, const AgeModel& m,
+                                                   draw::RatePlotAlong along) {
+    draw::RatePlotInterval p{r.label,
+                             r.between_ties ? draw::RateIntervalKind::BetweenTies
+                                            : draw::RateIntervalKind::Package,
+                             r.top_m, r.base_m, r.rate_q025_m_per_myr, r.rate_q500_m_per_myr,
+                             r.rate_q975_m_per_myr};
+    if (along == draw::RatePlotAlong::Age) {
+        const auto top = m.ageAt(r.top_m), base = m.ageAt(r.base_m);
+        if (!top || !base || !(base->q500_ma > top->q500_ma)) return std::nullopt;
+        p.span_top = top->q500_ma;
+        p.span_base = base->q500_ma;
+    }
+    return p;
+}
+
 } // namespace
 
 CommandRun addRatesCommand(CLI::App& app, const CommandIo& io) {
@@ -60,6 +81,8 @@ CommandRun addRatesCommand(CLI::App& app, const CommandIo& io) {
         std::string hole;
         std::string porosity_law;
         bool csv = false;
+        fs::path plot;
+        std::string plot_along = "depth";
         AgeModelOptions model;
     };
     auto o = std::make_shared<Options>();
@@ -74,8 +97,24 @@ CommandRun addRatesCommand(CLI::App& app, const CommandIo& io) {
                     "Porosity-depth law of the carbonate, PHI0,DECAY_M (Sclater & Christie 1980 "
                     "form phi = PHI0 exp(-z/DECAY_M)); no published limestone pair is built in");
     sub->add_flag("--csv", o->csv, "Print CSV instead of an aligned table");
+    sub->add_option("--plot", o->plot,
+                    "Draw the rates of --hole against depth or age to this .svg, .png or .pdf");
+    sub->add_option("--plot-along", o->plot_along,
+                    "depth: rates against depth (m); age: against the model's median age (Ma)")
+        ->check(CLI::IsMember({"depth", "age"}))
+        ->capture_default_str();
     addAgeModelOptions(*sub, o->model);
     return [o, &io]() {
+        if (!o->plot.empty()) {
+            if (o->hole.empty())
+                throw std::invalid_argument("--plot draws one hole: give --hole as well");
+            figureFormatOf(o->plot, "--plot"); // refuse before the long work
+        }
+        const auto along =
+            o->plot_along == "age" ? draw::RatePlotAlong::Age : draw::RatePlotAlong::Depth;
+        draw::RatePlotInput plot;
+        plot.hole = o->hole;
+        plot.along = along;
         const std::optional<PorosityLaw> law =
             o->porosity_law.empty() ? std::nullopt : std::optional(parseLaw(o->porosity_law));
         auto store = db::ProjectStore::open(o->project);
@@ -94,6 +133,7 @@ CommandRun addRatesCommand(CLI::App& app, const CommandIo& io) {
             for (const auto& r : m.rates) {
                 // Two ties at one depth (e.g. two dates of one sample) give no thickness: no rate.
                 if (r.defined_share <= 0 || !(r.base_m > r.top_m)) continue;
+                if (const auto p = plotInterval(r, m, along)) plot.intervals.push_back(*p);
                 std::string decompacted, mar, car;
                 std::string flags = r.between_ties ? "between_ties" : "package";
                 if (r.reef_framework) flags += ";reef_framework";
@@ -121,6 +161,16 @@ CommandRun addRatesCommand(CLI::App& app, const CommandIo& io) {
             }
         }
         t.print(io.out, csv);
+        if (!o->plot.empty()) {
+            if (plot.intervals.empty())
+                throw std::invalid_argument("--plot: hole " + o->hole +
+                                            " has no rate interval to draw");
+            ensureGuiApplication();
+            writeFigure(draw::layoutRatePlot(plot), o->plot, "--plot",
+                        "Accretion rates, hole " + o->hole, 200, draw::PdfPageSize::FitChart);
+            (csv ? io.err : io.out) << "drew the rates of " << o->hole << " against "
+                                    << o->plot_along << " to " << o->plot.string() << '\n';
+        }
         return int(kOk);
     };
 }

@@ -5,6 +5,8 @@
 // Stein & Stein 1992).
 #include "cli/age_model_inputs.hpp"
 #include "cli/command.hpp"
+#include "cli/figure_file.hpp"
+#include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
 
@@ -13,6 +15,7 @@
 #include "atollog/engine/sea_level_curve.hpp"
 #include "atollog/engine/seeded_draws.hpp"
 #include "atollog/engine/subsidence.hpp"
+#include "draw/subsidence_plot.hpp"
 
 #include <filesystem>
 #include <memory>
@@ -31,6 +34,7 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
         std::optional<double> plate_age_ma;
         bool per_hole = false;
         bool csv = false;
+        fs::path plot;
         AgeModelOptions model;
     };
     auto o = std::make_shared<Options>();
@@ -48,8 +52,11 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
         ->check(CLI::PositiveNumber);
     sub->add_flag("--per-hole", o->per_hole, "Print the subsidence rate of each hole instead");
     sub->add_flag("--csv", o->csv, "Print CSV instead of an aligned table");
+    sub->add_option("--plot", o->plot,
+                    "Draw subsidence against age (every hole, or --hole) to this .svg, .png or .pdf");
     addAgeModelOptions(*sub, o->model);
     return [o, &io]() {
+        if (!o->plot.empty()) figureFormatOf(o->plot, "--plot"); // refuse before the long work
         auto store = db::ProjectStore::open(o->project);
         const CoreDataset data = store.loadDataset();
         const SeaLevelCurve sea_level = data.sea_level.empty() ? SeaLevelCurve{} : SeaLevelCurve(data.sea_level);
@@ -67,7 +74,11 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
                               {"thermal_ps77_m", A::Right}, {"thermal_gdh1_m", A::Right}, {"flags"}});
         TablePrinter rates({{"hole"}, {"points", A::Right}, {"rate_m_per_myr", A::Right},
                             {"rate_sd_m_per_myr", A::Right}, {"mswd", A::Right}, {"flags"}});
+        draw::SubsidencePlotInput plot;
+        plot.note = "each dated horizon's median with its 95 % ranges; lines: York fit per hole "
+                    "(York et al. 2004)";
         for (const auto& in : gatherAgeModelInputs(data, o->model, o->hole)) {
+            draw::SubsidencePlotHole plot_hole{in.hole, {}, std::nullopt};
             const Hole& hole = *holes.at(in.hole);
             std::string hole_flags = hole.collar_elev_m ? "" : "no_collar_elevation";
             // Samples in intervals that carry a water depth, within the model's depth range.
@@ -112,9 +123,14 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
                                 e.rate_m_per_myr ? formatNumber(e.rate_m_per_myr->p50, csv, 1) : "",
                                 ps77, gdh1, flags});
                 if (!e.rate_undefined_young_age) points.push_back(subsidencePoint(t.sample->sample, e));
+                plot_hole.points.push_back({t.sample->sample, e.age_ma.p50, e.age_ma.p2_5,
+                                            e.age_ma.p97_5, e.subsidence_m.p50,
+                                            e.subsidence_m.p2_5, e.subsidence_m.p97_5});
             }
             if (points.size() >= 3) {
                 const auto r = holeSubsidenceRate(points);
+                plot_hole.rate = draw::SubsidenceRateLine{r.rate_m_per_myr, r.rate_sd_m_per_myr,
+                                                          r.intercept_m};
                 rates.addRow({in.hole, std::to_string(r.points), formatNumber(r.rate_m_per_myr, csv, 1),
                               formatNumber(r.rate_sd_m_per_myr, csv, 1), formatNumber(r.mswd, csv, 2),
                               hole_flags});
@@ -122,8 +138,18 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
                 rates.addRow({in.hole, std::to_string(points.size()), "", "", "",
                               hole_flags + (hole_flags.empty() ? "" : ";") + "too_few_points"});
             }
+            if (!plot_hole.points.empty()) plot.holes.push_back(std::move(plot_hole));
         }
         (o->per_hole ? rates : samples).print(io.out, csv);
+        if (!o->plot.empty()) {
+            if (plot.holes.empty())
+                throw std::invalid_argument("--plot: no hole has a sample in an interval with a "
+                                            "logged water depth; nothing to draw");
+            ensureGuiApplication();
+            writeFigure(draw::layoutSubsidencePlot(plot), o->plot, "--plot",
+                        "Subsidence against age", 200, draw::PdfPageSize::FitChart);
+            (csv ? io.err : io.out) << "drew subsidence against age to " << o->plot.string() << '\n';
+        }
         return int(kOk);
     };
 }

@@ -75,6 +75,31 @@ enum class ItemRole {
     ColumnAgeModel,   // the age model's median line ("median") or 95 % band ("band")
     ColumnDateMarker,
     ColumnDateBar, // a date's age range (horizontal) and depth bracket (vertical)
+    // x-y plots (xy_plot_frame.hpp): axes (keys "x <label>", "y <label>", "x heading",
+    // "y heading"); the frame box and grid keep Frame.
+    XyAxis,      // tick marks and the axis headings
+    XyAxisLabel, // tick labels
+    // Subsidence against age (keys: "<hole> <sample>" for points, the hole for its line).
+    SubsidencePoint,
+    SubsidenceBar,      // a point's 95 % range in age (horizontal) and subsidence (vertical)
+    SubsidenceRateLine, // a hole's fitted rate line, and its 95 % band
+    // Rate against depth or age (key: the interval's label).
+    RateBar,  // the median rate as a horizontal bar over the interval's span
+    RateBand, // the 2.5-97.5 % rate range over the same span
+    // Line-of-correlation cross-plot (keys: the event id; "segment <n>" counted from 1;
+    // "x <depth>" / "y <depth>" (m, two decimals) for the holes' surfaces).
+    LocEventMarker,  // the event's level in both holes
+    LocEventBracket, // the box over the event's two depth brackets
+    LocEventLabel,
+    LocOffLine,      // the ring around an event flagged off the line
+    LocSegment,      // a fitted piece of the line
+    LocSegmentBand,  // its 95 % band
+    LocSurface,      // a logged surface of either hole, across the plot
+    // Age against chain distance (key: the hole for points, "fit" for the line).
+    ChainPoint,
+    ChainBar,   // a hole's 95 % range in distance (horizontal) and age (vertical)
+    ChainLabel, // the hole's name beside its point
+    ChainFit,   // the fitted migration line, and its 95 % band
 };
 
 /// The role and the identifier of the datum an item draws (taxon id, event id, sample id).
