@@ -2,17 +2,15 @@
 // depth grid and at every sample, hiatuses, likely outlier ties; stored with its provenance and
 // drawn as an age-depth plot.
 #include "cli/age_model_inputs.hpp"
+#include "cli/age_model_run.hpp"
 #include "cli/command.hpp"
 #include "cli/figure_file.hpp"
+#include "cli/figure_inputs.hpp"
 #include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
 
-#include "atollog/engine/basement_age.hpp"
-
-#include "atollog/db/age_model_store.hpp"
 #include "atollog/db/project_store.hpp"
-#include "atollog/db/tie_point_store.hpp"
 #include "draw/age_depth_plot.hpp"
 
 #include <algorithm>
@@ -28,85 +26,10 @@ namespace {
 
 using A = TablePrinter::Align;
 
-/// The most likely outlier: a tie whose posterior sits far in its own tail, else the tie whose
-/// removal raises acceptance most, when either passes its threshold.
-std::optional<std::string> leadingOutlier(const AgeModel& m) {
-    if (!m.tie_tails.empty() && m.tie_tails.front().likely_outlier) return m.tie_tails.front().label;
-    if (!m.outlier_ranking.empty() && m.outlier_ranking.front().likely_conflict)
-        return m.outlier_ranking.front().label;
-    return std::nullopt;
-}
-
-db::StoredAgeModel toStored(const AgeModel& m, const HoleModelInputs& in, const CoreDataset& data) {
-    db::StoredAgeModel s;
-    s.hole = m.hole;
-    s.tie_count = static_cast<int>(in.ties.size());
-    s.draws = m.draws;
-    s.acceptance_rate = std::clamp(m.acceptance_rate, 0.0, 1.0);
-    s.outlier_tie = leadingOutlier(m);
-    for (const auto& r : m.grid)
-        s.points.push_back({r.depth_m, std::nullopt, r.age_q025_ma, r.age_q500_ma, r.age_q975_ma,
-                            r.age_mean_ma});
-    for (const auto& sample : data.samples) {
-        if (sample.hole != m.hole) continue;
-        if (const auto q = m.ageAt(sample.top_m))
-            s.points.push_back({sample.top_m, sample.sample, q->q025_ma, q->q500_ma, q->q975_ma,
-                                q->mean_ma});
-    }
-    for (const auto& h : m.hiatuses)
-        if (h.duration_q500_myr)
-            s.hiatuses.push_back({h.depth_m, *h.duration_q025_myr, *h.duration_q500_myr,
-                                  *h.duration_q975_myr, h.probability_positive});
-    for (const auto& r : m.rates) {
-        // Two ties at one depth (e.g. two dates of one sample) give no thickness: no rate.
-        if (r.defined_share <= 0 || !(r.base_m > r.top_m)) continue;
-        std::string flags = r.reef_framework ? "reef_framework" : "";
-        if (r.reef_framework && r.median_outside_reef_range)
-            flags += ";outside_reef_range";
-        s.rates.push_back({r.label, r.top_m, r.base_m, r.rate_q025_m_per_myr, r.rate_q500_m_per_myr,
-                           r.rate_q975_m_per_myr, flags});
-    }
-    return s;
-}
-
-draw::AgeDepthTie plotTie(const AgeTie& t, bool outlier, bool excluded) {
-    return {t.label,
-            t.source == AgeTieSource::Datum ? draw::AgeTieKind::Datum : draw::AgeTieKind::Date,
-            t.shallow_m,
-            t.deep_m,
-            t.age.quantile(0.5),
-            t.age.quantile(0.025),
-            t.age.quantile(0.975),
-            outlier,
-            excluded};
-}
-
-/// Above this many ties the labels crowd each other: they are left off unless asked for.
-constexpr std::size_t kMaxLabelledTies = 30;
-
 void drawPlot(const AgeModel& m, const HoleModelInputs& in, const fs::path& out, bool labels) {
-    draw::AgeDepthPlotInput p;
-    p.hole = m.hole;
-    p.top_m = 0;
-    p.base_m = m.grid.empty() ? 1.0 : m.grid.back().depth_m;
-    for (const auto& r : m.grid) p.model.push_back({r.depth_m, r.age_q025_ma, r.age_q500_ma, r.age_q975_ma});
-    const auto outlier = leadingOutlier(m);
-    auto inside = [&](const AgeTie& t) { return t.shallow_m >= p.top_m && t.deep_m <= p.base_m; };
-    // The ties as the model saw them: lava dates below a logged contact pooled into one.
-    const std::vector<AgeTie> ties =
-        in.basement_contact_m ? poolBasementTies(in.ties, *in.basement_contact_m) : in.ties;
-    for (const auto& t : ties)
-        if (inside(t)) p.ties.push_back(plotTie(t, outlier && *outlier == t.label, false));
-    for (const auto& t : in.excluded)
-        if (inside(t)) p.ties.push_back(plotTie(t, false, true));
-    int n = 0;
-    for (const auto& h : m.hiatuses)
-        if (h.duration_q500_myr && h.probability_positive >= 0.5 && h.depth_m <= p.base_m)
-            p.hiatuses.push_back({h.depth_m, *h.duration_q500_myr, "H" + std::to_string(++n)});
+    const draw::AgeDepthPlotInput p = ageDepthPlotInput(m, in);
     ensureGuiApplication();
-    draw::AgeDepthPlotStyle style;
-    style.show_tie_labels = labels || p.ties.size() <= kMaxLabelledTies;
-    const auto list = draw::layoutAgeDepthPlot(p, style);
+    const auto list = draw::layoutAgeDepthPlot(p, ageDepthPlotStyle(p, labels));
     writeFigure(list, out, "--plot", "Age-depth model, hole " + m.hole, 200,
                 draw::PdfPageSize::FitChart);
 }
@@ -149,12 +72,12 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
             throw std::invalid_argument("--plot draws one hole: give --hole as well");
         auto store = db::ProjectStore::open(o->project);
         const CoreDataset data = store.loadDataset();
-        const auto inputs = gatherAgeModelInputs(data, o->model, o->hole);
-        std::vector<AgeModel> models;
-        for (const auto& in : inputs) {
-            io.progress("age model of " + in.hole + " (" + std::to_string(in.ties.size()) + " ties)");
-            models.push_back(buildHoleModel(in, o->model));
-        }
+        const AgeModelRun run = buildAgeModels(data, o->model, o->hole, [&io](const std::string& phase) {
+            io.progress(phase);
+            return true;
+        });
+        const auto& inputs = run.inputs;
+        const auto& models = run.models;
         const bool csv = o->csv;
         if (o->by == "summary") {
             TablePrinter t({{"hole"}, {"ties", A::Right}, {"draws", A::Right},
@@ -224,20 +147,12 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
                                     << o->plot.string() << '\n';
         }
         if (o->no_store) return int(kOk);
-        db::ModelRunRecord run;
-        run.kind = "age-model";
-        run.settings = o->model.settingsText() + (o->hole.empty() ? "" : "\nage.hole=" + o->hole);
-        run.seed = o->model.seed;
-        run.inputs_sha256 = db::ProjectStore::datasetHash(data);
         std::ostream& note = csv ? io.err : io.out;
-        if (const auto same = db::sameLatestRun(store, run)) {
-            note << "age models unchanged since run #" << same->id << '\n';
-            return int(kOk);
-        }
-        std::vector<db::StoredAgeModel> stored;
-        for (std::size_t i = 0; i < models.size(); ++i) stored.push_back(toStored(models[i], inputs[i], data));
-        run.summary = std::to_string(models.size()) + (models.size() == 1 ? " hole" : " holes");
-        note << "stored the age models as run #" << db::storeAgeModels(store, run, stored) << '\n';
+        const StoredRunOutcome stored = storeAgeModelRun(store, data, o->model, o->hole, run);
+        if (stored.unchanged)
+            note << "age models unchanged since run #" << stored.run_id << '\n';
+        else
+            note << "stored the age models as run #" << stored.run_id << '\n';
         return int(kOk);
     };
 }

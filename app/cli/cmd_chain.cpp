@@ -2,6 +2,7 @@
 // each hole's basement age against its distance along the chain (York et al. 2004).
 #include "cli/command.hpp"
 #include "cli/figure_file.hpp"
+#include "cli/figure_inputs.hpp"
 #include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
@@ -84,13 +85,7 @@ CommandRun addChainCommand(CLI::App& app, const CommandIo& io) {
         }
         table.print(io.out, csv);
         if (!o->plot.empty()) {
-            draw::ChainPlotInput plot;
-            plot.note = "basement: the oldest Ar-Ar or K-Ar date in a volcanic interval of each "
-                        "hole; bars: 95 % (1.96 sd)";
-            for (const auto& p : points)
-                plot.points.push_back({p.hole, p.distance_km, p.distance_sd_km, p.age_ma, p.age_sd_ma});
-            plot.fit = draw::ChainPlotFit{fit.intercept_ma, fit.york.slope, *fit.rate_km_per_myr,
-                                          *fit.rate_sd_km_per_myr, "York fit"};
+            const draw::ChainPlotInput plot = chainPlotInput(points, fit);
             ensureGuiApplication();
             writeFigure(draw::layoutChainPlot(plot), o->plot, "--plot",
                         "Age against distance along the chain", 200, draw::PdfPageSize::FitChart);

@@ -3,6 +3,7 @@
 #include "cli/age_model_inputs.hpp"
 #include "cli/command.hpp"
 #include "cli/figure_file.hpp"
+#include "cli/figure_inputs.hpp"
 #include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
 #include "cli/table_printer.hpp"
@@ -53,24 +54,6 @@ PorosityLaw parseLaw(const std::string& text) {
             "': expected PHI0,DECAY_M with 0 <= PHI0 < 1 (surface porosity as a fraction) and "
             "DECAY_M > 0 (depth in m over which porosity falls by a factor e), e.g. 0.5,2000");
     return law;
-}
-
-/// The rate plot's interval for one rate, along depth or along the model's median ages (empty
-/// when the model has no age at an end or the ages do not increase).
-std::optional<draw::RatePlotInterval> plotInterval(const AccretionRate& r, const AgeModel& m,
-                                                   draw::RatePlotAlong along) {
-    draw::RatePlotInterval p{r.label,
-                             r.between_ties ? draw::RateIntervalKind::BetweenTies
-                                            : draw::RateIntervalKind::Package,
-                             r.top_m, r.base_m, r.rate_q025_m_per_myr, r.rate_q500_m_per_myr,
-                             r.rate_q975_m_per_myr};
-    if (along == draw::RatePlotAlong::Age) {
-        const auto top = m.ageAt(r.top_m), base = m.ageAt(r.base_m);
-        if (!top || !base || !(base->q500_ma > top->q500_ma)) return std::nullopt;
-        p.span_top = top->q500_ma;
-        p.span_base = base->q500_ma;
-    }
-    return p;
 }
 
 } // namespace
@@ -133,7 +116,7 @@ CommandRun addRatesCommand(CLI::App& app, const CommandIo& io) {
             for (const auto& r : m.rates) {
                 // Two ties at one depth (e.g. two dates of one sample) give no thickness: no rate.
                 if (r.defined_share <= 0 || !(r.base_m > r.top_m)) continue;
-                if (const auto p = plotInterval(r, m, along)) plot.intervals.push_back(*p);
+                if (const auto p = ratePlotInterval(r, m, along)) plot.intervals.push_back(*p);
                 std::string decompacted, mar, car;
                 std::string flags = r.between_ties ? "between_ties" : "package";
                 if (r.reef_framework) flags += ";reef_framework";

@@ -8,12 +8,11 @@
 #include "cli/figure_file.hpp"
 #include "cli/gui_context.hpp"
 #include "cli/run_cli.hpp"
+#include "cli/subsidence_run.hpp"
 #include "cli/table_printer.hpp"
 
 #include "atollog/db/project_store.hpp"
 #include "atollog/engine/reference_depth_curves.hpp"
-#include "atollog/engine/sea_level_curve.hpp"
-#include "atollog/engine/seeded_draws.hpp"
 #include "atollog/engine/subsidence.hpp"
 #include "draw/subsidence_plot.hpp"
 
@@ -21,7 +20,6 @@
 #include <memory>
 #include <optional>
 #include <ostream>
-#include <unordered_map>
 
 namespace fs = std::filesystem;
 
@@ -59,12 +57,9 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
         if (!o->plot.empty()) figureFormatOf(o->plot, "--plot"); // refuse before the long work
         auto store = db::ProjectStore::open(o->project);
         const CoreDataset data = store.loadDataset();
-        const SeaLevelCurve sea_level = data.sea_level.empty() ? SeaLevelCurve{} : SeaLevelCurve(data.sea_level);
         if (data.sea_level.empty())
             io.err << "warning: the project has no sea-level curve (sealevel.csv): sea level then "
                       "is taken as today's\n";
-        std::unordered_map<std::string, const Hole*> holes;
-        for (const auto& h : data.holes) holes[h.hole] = &h;
 
         const bool csv = o->csv;
         using A = TablePrinter::Align;
@@ -74,42 +69,13 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
                               {"thermal_ps77_m", A::Right}, {"thermal_gdh1_m", A::Right}, {"flags"}});
         TablePrinter rates({{"hole"}, {"points", A::Right}, {"rate_m_per_myr", A::Right},
                             {"rate_sd_m_per_myr", A::Right}, {"mswd", A::Right}, {"flags"}});
-        draw::SubsidencePlotInput plot;
-        plot.note = "each dated horizon's median with its 95 % ranges; lines: York fit per hole "
-                    "(York et al. 2004)";
-        for (const auto& in : gatherAgeModelInputs(data, o->model, o->hole)) {
-            draw::SubsidencePlotHole plot_hole{in.hole, {}, std::nullopt};
-            const Hole& hole = *holes.at(in.hole);
-            std::string hole_flags = hole.collar_elev_m ? "" : "no_collar_elevation";
-            // Samples in intervals that carry a water depth, within the model's depth range.
-            struct Target { const Sample* sample; double min_m, max_m; };
-            std::vector<Target> targets;
-            double deepest_m = 0;
-            for (const auto& t : in.ties) deepest_m = std::max(deepest_m, t.deep_m);
-            for (const auto& s : data.samples) {
-                if (s.hole != in.hole || s.top_m > deepest_m) continue;
-                for (const auto& iv : data.intervals)
-                    if (iv.hole == in.hole && iv.paleodepth_min_m && iv.paleodepth_max_m &&
-                        s.top_m >= iv.top_m && s.top_m < iv.base_m) {
-                        targets.push_back({&s, *iv.paleodepth_min_m, *iv.paleodepth_max_m});
-                        break;
-                    }
-            }
-            std::vector<double> keep;
-            for (const auto& t : targets) keep.push_back(t.sample->top_m);
-            io.progress("age model of " + in.hole + " at " + std::to_string(keep.size()) + " samples");
-            const AgeModel m = buildHoleModel(in, o->model, keep);
-            std::vector<SubsidencePoint> points;
-            for (std::size_t i = 0; i < targets.size(); ++i) {
-                const auto& t = targets[i];
-                const auto e = subsidenceDraws(t.sample->top_m, hole.collar_elev_m.value_or(0.0),
-                                               t.min_m, t.max_m, m.kept_age_draws_ma[i], sea_level,
-                                               streamSeed(o->model.seed, i));
-                std::string flags = hole_flags;
-                auto add = [&flags](const char* f) { flags += (flags.empty() ? "" : ";") + std::string(f); };
-                if (e.no_sea_level_curve) add("no_sea_level_curve");
-                if (e.draws_beyond_sea_level_curve > 0) add("beyond_sea_level_curve");
-                if (e.rate_undefined_young_age) add("rate_undefined_young_age");
+        const auto holes = computeSubsidence(data, o->model, o->hole, [&io](const std::string& phase) {
+            io.progress(phase);
+            return true;
+        });
+        for (const HoleSubsidence& h : holes) {
+            for (const SampleSubsidence& s : h.samples) {
+                const SubsidenceEstimate& e = s.estimate;
                 std::string ps77, gdh1;
                 if (o->plate_age_ma && e.age_ma.p50 < *o->plate_age_ma) {
                     const double then_ma = *o->plate_age_ma - e.age_ma.p50;
@@ -117,29 +83,23 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
                                                                    then_ma, *o->plate_age_ma), csv, 1);
                     gdh1 = formatNumber(expectedThermalSubsidenceM(ReferenceDepthCurve::SteinStein1992, then_ma, *o->plate_age_ma), csv, 1);
                 }
-                samples.addRow({in.hole, t.sample->sample, formatNumber(t.sample->top_m, csv, 2),
+                samples.addRow({h.hole->hole, s.sample->sample, formatNumber(s.sample->top_m, csv, 2),
                                 formatNumber(e.age_ma.p50, csv, 4), formatNumber(e.subsidence_m.p2_5, csv, 1),
                                 formatNumber(e.subsidence_m.p50, csv, 1), formatNumber(e.subsidence_m.p97_5, csv, 1),
                                 e.rate_m_per_myr ? formatNumber(e.rate_m_per_myr->p50, csv, 1) : "",
-                                ps77, gdh1, flags});
-                if (!e.rate_undefined_young_age) points.push_back(subsidencePoint(t.sample->sample, e));
-                plot_hole.points.push_back({t.sample->sample, e.age_ma.p50, e.age_ma.p2_5,
-                                            e.age_ma.p97_5, e.subsidence_m.p50,
-                                            e.subsidence_m.p2_5, e.subsidence_m.p97_5});
+                                ps77, gdh1, s.flags});
             }
-            if (points.size() >= 3) {
-                const auto r = holeSubsidenceRate(points);
-                plot_hole.rate = draw::SubsidenceRateLine{r.rate_m_per_myr, r.rate_sd_m_per_myr,
-                                                          r.intercept_m};
-                rates.addRow({in.hole, std::to_string(r.points), formatNumber(r.rate_m_per_myr, csv, 1),
-                              formatNumber(r.rate_sd_m_per_myr, csv, 1), formatNumber(r.mswd, csv, 2),
-                              hole_flags});
+            if (h.rate) {
+                rates.addRow({h.hole->hole, std::to_string(h.rate->points),
+                              formatNumber(h.rate->rate_m_per_myr, csv, 1),
+                              formatNumber(h.rate->rate_sd_m_per_myr, csv, 1),
+                              formatNumber(h.rate->mswd, csv, 2), h.hole_flags});
             } else {
-                rates.addRow({in.hole, std::to_string(points.size()), "", "", "",
-                              hole_flags + (hole_flags.empty() ? "" : ";") + "too_few_points"});
+                rates.addRow({h.hole->hole, std::to_string(h.points.size()), "", "", "",
+                              h.hole_flags + (h.hole_flags.empty() ? "" : ";") + "too_few_points"});
             }
-            if (!plot_hole.points.empty()) plot.holes.push_back(std::move(plot_hole));
         }
+        const draw::SubsidencePlotInput plot = subsidencePlotInput(holes);
         (o->per_hole ? rates : samples).print(io.out, csv);
         if (!o->plot.empty()) {
             if (plot.holes.empty())
