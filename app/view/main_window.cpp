@@ -2,6 +2,9 @@
 
 #include "cli/figure_file.hpp"
 #include "draw/panel_layout.hpp"
+#include "view/exception_text.hpp"
+#include "view/figure_window.hpp"
+#include "view/logging_desk.hpp"
 #include "view/panel_canvas.hpp"
 #include "view/project_panel.hpp"
 #include "view/selection_details.hpp"
@@ -23,6 +26,7 @@
 #include <QMessageBox>
 #include <QSettings>
 #include <QStatusBar>
+#include <QTimer>
 #include <QToolBar>
 
 #include <algorithm>
@@ -36,6 +40,7 @@ namespace {
 constexpr const char *kGeometryKey = "window/geometry";
 constexpr const char *kStateKey = "window/state";
 constexpr const char *kLastProjectKey = "project/last";
+constexpr const char *kRecentProjectsKey = "project/recent"; // newest first
 constexpr const char *kTracksKey = "panel/tracks"; // the ticked track words, as --tracks lists them
 
 const char *const kTrackWords[] = {"runs", "lithology", "surfaces", "samples",
@@ -43,16 +48,6 @@ const char *const kTrackWords[] = {"runs", "lithology", "surfaces", "samples",
 
 /// Drafting scales offered; 1:500 is the panel's own default (PanelView).
 constexpr int kScales[] = {100, 200, 500, 1000, 2000, 5000};
-
-QString exceptionText() {
-    try {
-        throw;
-    } catch (const std::exception &e) {
-        return QString::fromStdString(e.what());
-    } catch (...) {
-        return QObject::tr("an unknown error");
-    }
-}
 
 } // namespace
 
@@ -67,6 +62,25 @@ MainWindow::MainWindow(QWidget *parent) : QMainWindow(parent) {
     dock->setWidget(side_);
     addDockWidget(Qt::RightDockWidgetArea, dock);
 
+    desk_ = new LoggingDesk(this);
+    auto *desk_dock = new QDockWidget(tr("Logging desk"), this);
+    desk_dock->setObjectName(QStringLiteral("logging-desk-dock"));
+    desk_dock->setWidget(desk_);
+    addDockWidget(Qt::BottomDockWidgetArea, desk_dock);
+    // The side pane keeps its full height; the desk sits under the canvas only.
+    setCorner(Qt::BottomRightCorner, Qt::RightDockWidgetArea);
+    // The panel shows the whole project, so it follows the desk's edits: once per burst, as
+    // loading it builds age models.
+    panel_reload_ = new QTimer(this);
+    panel_reload_->setSingleShot(true);
+    panel_reload_->setInterval(400);
+    connect(desk_, &LoggingDesk::projectWritten, panel_reload_, qOverload<>(&QTimer::start));
+    connect(panel_reload_, &QTimer::timeout, this, [this] {
+        if (!project_path_.isEmpty()) {
+            showProjectPanel(project_path_, true);
+        }
+    });
+
     readout_ = new QLabel(this);
     statusBar()->addPermanentWidget(readout_);
 
@@ -77,6 +91,7 @@ MainWindow::MainWindow(QWidget *parent) : QMainWindow(parent) {
     buildToolBar();
     buildMenus();
     menuBar()->findChild<QMenu *>(QStringLiteral("view-menu"))->addAction(dock->toggleViewAction());
+    menuBar()->findChild<QMenu *>(QStringLiteral("view-menu"))->addAction(desk_dock->toggleViewAction());
 
     connect(side_, &SidePane::choiceChanged, this, [this] {
         refreshFlattenChoices();
@@ -159,11 +174,24 @@ void MainWindow::buildMenus() {
         }
     });
     reopen->setShortcut(QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_O));
+    recent_menu_ = file->addMenu(tr("Recent &projects"));
+    recent_menu_->setObjectName(QStringLiteral("recent-menu"));
+    refreshRecentMenu();
     QAction *exporting = file->addAction(tr("&Export..."), this, &MainWindow::chooseAndExport);
     exporting->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_E));
     file->addSeparator();
     QAction *quit = file->addAction(tr("&Quit"), this, &QWidget::close);
     quit->setShortcut(QKeySequence::Quit);
+
+    QMenu *edit = menuBar()->addMenu(tr("&Edit"));
+    edit->addAction(desk_->undoAction());
+    edit->addAction(desk_->redoAction());
+    edit->addSeparator();
+    edit->addAction(desk_->addIntervalAction());
+
+    QMenu *analyses = menuBar()->addMenu(tr("&Analyses"));
+    QAction *figures = analyses->addAction(tr("&Figures..."), this, &MainWindow::showFigures);
+    figures->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_G));
 
     QMenu *view = menuBar()->addMenu(tr("&View"));
     view->setObjectName(QStringLiteral("view-menu"));
@@ -182,6 +210,13 @@ void MainWindow::buildMenus() {
 }
 
 bool MainWindow::openProject(const QString &path) {
+    const bool shown = showProjectPanel(path, false);
+    // The desk opens even when the panel cannot be drawn: it may be how the data gets fixed.
+    desk_->openProject(QFileInfo(path).absoluteFilePath());
+    return shown;
+}
+
+bool MainWindow::showProjectPanel(const QString &path, bool keep_choice) {
     QApplication::setOverrideCursor(Qt::WaitCursor);
     try {
         ProjectPanel panel = loadProjectPanel(path.toStdString());
@@ -192,10 +227,20 @@ bool MainWindow::openProject(const QString &path) {
         }
         choice.shown_events = {panel.default_events.begin(), panel.default_events.end()};
         choice.shown_isochrons = {panel.default_isochrons.begin(), panel.default_isochrons.end()};
+        if (keep_choice) {
+            choice = side_->choice();
+        }
         project_path_ = QFileInfo(path).absoluteFilePath();
         setWindowTitle(tr("%1 - atollog-view").arg(QFileInfo(path).fileName()));
-        QSettings().setValue(kLastProjectKey, project_path_);
-        showPanel(std::move(panel.full), choice);
+        if (keep_choice) {
+            full_ = std::move(panel.full);
+            side_->setContent(full_, choice);
+            refreshFlattenChoices();
+            relayout();
+        } else {
+            showPanel(std::move(panel.full), choice);
+        }
+        rememberProject(project_path_); // after the panel: the figures window takes its holes
         statusBar()->showMessage(QString::fromStdString(modelSourceLine(panel)));
         return true;
     } catch (...) {
@@ -204,6 +249,62 @@ bool MainWindow::openProject(const QString &path) {
                tr("%1\n\ncould not be opened:\n%2").arg(path, exceptionText()));
         return false;
     }
+}
+
+QStringList MainWindow::recentProjects() {
+    return QSettings().value(kRecentProjectsKey).toStringList();
+}
+
+void MainWindow::rememberProject(const QString &path) {
+    QSettings settings;
+    settings.setValue(kLastProjectKey, path);
+    QStringList recent = recentProjects();
+    recent.removeAll(path);
+    recent.prepend(path);
+    while (recent.size() > kRecentProjects) {
+        recent.removeLast();
+    }
+    settings.setValue(kRecentProjectsKey, recent);
+    refreshRecentMenu();
+    if (figures_ != nullptr) {
+        QStringList holes;
+        for (const auto &column : full_.columns) {
+            holes << QString::fromStdString(column.hole);
+        }
+        figures_->setProject(path, holes);
+    }
+}
+
+void MainWindow::refreshRecentMenu() {
+    if (recent_menu_ == nullptr) {
+        return;
+    }
+    recent_menu_->clear();
+    const QStringList recent = recentProjects();
+    for (int i = 0; i < recent.size(); ++i) {
+        const QString path = recent[i];
+        QAction *a = recent_menu_->addAction(QStringLiteral("&%1 %2").arg(i + 1).arg(path),
+                                             this, [this, path] { openProject(path); });
+        a->setData(path);
+    }
+    recent_menu_->setEnabled(!recent.isEmpty());
+}
+
+FigureWindow *MainWindow::showFigures() {
+    if (figures_ == nullptr) {
+        figures_ = new FigureWindow(this);
+        // A figure that stored an age model: the panel shows the newest fresh models.
+        connect(figures_, &FigureWindow::modelsStored, panel_reload_,
+                qOverload<>(&QTimer::start));
+    }
+    QStringList holes;
+    for (const auto &column : full_.columns) {
+        holes << QString::fromStdString(column.hole);
+    }
+    figures_->setProject(project_path_, holes);
+    figures_->show();
+    figures_->raise();
+    return figures_;
 }
 
 void MainWindow::showPanel(draw::PanelInput full, const PanelChoice &choice) {

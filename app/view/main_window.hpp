@@ -13,9 +13,13 @@
 class QAction;
 class QComboBox;
 class QLabel;
+class QMenu;
+class QTimer;
 
 namespace atollog::view {
 
+class FigureWindow;
+class LoggingDesk;
 class PanelCanvas;
 class SidePane;
 
@@ -37,6 +41,12 @@ class MainWindow : public QMainWindow {
 
     PanelCanvas *canvas() const { return canvas_; }
     SidePane *sidePane() const { return side_; }
+    LoggingDesk *loggingDesk() const { return desk_; }
+    /// The figures window (age-depth, rates, subsidence, ...) of the open project, shown.
+    FigureWindow *showFigures();
+    /// Paths of the projects opened lately, newest first (at most kRecentProjects).
+    static QStringList recentProjects();
+    static constexpr int kRecentProjects = 8;
     QComboBox *flattenCombo() const { return flatten_; }
     QComboBox *scaleCombo() const { return scale_; }
     QAction *depthAction() const { return depth_; }
@@ -50,6 +60,11 @@ class MainWindow : public QMainWindow {
 
   private:
     void buildMenus();
+    void refreshRecentMenu();
+    void rememberProject(const QString &path);
+    /// Loads the project's panel; `keep_choice` keeps what is ticked and the zoom (a reload
+    /// after an edit on the logging desk).
+    bool showProjectPanel(const QString &path, bool keep_choice);
     void buildToolBar();
     void relayout();
     void refreshFlattenChoices();
@@ -61,6 +76,10 @@ class MainWindow : public QMainWindow {
 
     PanelCanvas *canvas_ = nullptr;
     SidePane *side_ = nullptr;
+    LoggingDesk *desk_ = nullptr;
+    FigureWindow *figures_ = nullptr; ///< made on first use
+    QMenu *recent_menu_ = nullptr;
+    QTimer *panel_reload_ = nullptr; ///< one panel reload after a burst of desk edits
     QComboBox *flatten_ = nullptr;
     QComboBox *scale_ = nullptr;
     QAction *depth_ = nullptr;

@@ -1,0 +1,114 @@
+#include "view/runs_table_model.hpp"
+
+#include "view/desk_project.hpp"
+
+#include <algorithm>
+#include <cmath>
+
+namespace atollog::view {
+
+namespace {
+
+const char *const kFieldNames[] = {"run", "top_m", "base_m", "recovered_m", "cored_m",
+                                   "recovery_pct"};
+
+} // namespace
+
+RunsTableModel::RunsTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
+
+int RunsTableModel::columnCount(const QModelIndex &parent) const {
+    return parent.isValid() ? 0 : ColumnCount;
+}
+
+QVariant RunsTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
+    if (orientation == Qt::Vertical) {
+        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+    }
+    if (section < 0 || section >= ColumnCount) {
+        return {};
+    }
+    const QString unit = unitSymbol(depthUnit());
+    if (role == Qt::DisplayRole) {
+        switch (section) {
+        case Run: return tr("Run");
+        case Top: return tr("Top (%1)").arg(unit);
+        case Base: return tr("Base (%1)").arg(unit);
+        case Recovered: return tr("Recovered (%1)").arg(unit);
+        case Cored: return tr("Cored (%1)").arg(unit);
+        case Recovery: return tr("Recovery (%)");
+        default: return {};
+        }
+    }
+    if (role == Qt::ToolTipRole) {
+        switch (section) {
+        case Cored: return tr("Base minus top; computed");
+        case Recovery: return tr("Recovered over cored length; computed, updated as you log");
+        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
+        }
+    }
+    return {};
+}
+
+int RunsTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
+    return static_cast<int>(std::count_if(data.runs.begin(), data.runs.end(),
+                                          [&](const CoreRun &r) { return r.hole == hole; }));
+}
+
+void RunsTableModel::readRows(const CoreDataset &data, const std::string &hole) {
+    rows_.clear();
+    for (const CoreRun &r : data.runs) {
+        if (r.hole == hole) {
+            rows_.push_back(r);
+        }
+    }
+}
+
+QString recoveryText(const CoreRun &run) {
+    const double cored_m = run.cored_m();
+    if (!(cored_m > 0) || !std::isfinite(run.recovered_m)) {
+        return {}; // no length, no share: the run's own check says what is wrong
+    }
+    return QString::number(100.0 * run.recovered_m / cored_m, 'f', 1);
+}
+
+QString RunsTableModel::cellText(int r, int column) const {
+    const CoreRun &run = runAt(r);
+    switch (column) {
+    case Run: return QString::fromStdString(run.run);
+    case Top: return depthText(run.top_m, depthUnit());
+    case Base: return depthText(run.base_m, depthUnit());
+    case Recovered: return depthText(run.recovered_m, depthUnit());
+    case Cored: return depthText(run.cored_m(), depthUnit());
+    case Recovery: return recoveryText(run);
+    default: return {};
+    }
+}
+
+DeskTableModel::TypedRow RunsTableModel::typed(int r, int column, const QString &text) const {
+    CoreRun run = runAt(r);
+    if (column == Run) {
+        run.run = text.toStdString();
+        return db::EditableRow{run};
+    }
+    const std::optional<double> number = readNumber(text);
+    const QString field = headerData(column, Qt::Horizontal).toString();
+    if (!number) {
+        return tr("runs: run '%1': %2: '%3' is not a number; type a length in %4, e.g. 1.25")
+            .arg(QString::fromStdString(run.run), field, text, unitSymbol(depthUnit()));
+    }
+    const double metres = depthInMetres(*number, depthUnit());
+    switch (column) {
+    case Top: run.top_m = metres; break;
+    case Base: run.base_m = metres; break;
+    case Recovered: run.recovered_m = metres; break;
+    default: return tr("%1 is computed, not typed").arg(field);
+    }
+    return db::EditableRow{run};
+}
+
+QString RunsTableModel::editLabel(int r, int column) const {
+    return tr("%1 of run %2")
+        .arg(QLatin1String(kFieldNames[column]), QString::fromStdString(runAt(r).run));
+}
+
+} // namespace atollog::view

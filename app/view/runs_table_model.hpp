@@ -1,0 +1,42 @@
+#pragma once
+// The core runs of the chosen hole, one per line, in stored order: run id, top, base and
+// recovered length typed in the desk's depth unit, and the run's cored length and recovery
+// (recovered / cored, in %) computed, read only, so the recovery follows what is typed.
+#include "view/desk_table_model.hpp"
+
+#include <vector>
+
+namespace atollog::view {
+
+class RunsTableModel : public DeskTableModel {
+    Q_OBJECT
+
+  public:
+    enum Column { Run, Top, Base, Recovered, Cored, Recovery, ColumnCount };
+
+    explicit RunsTableModel(DeskProject &desk, QObject *parent = nullptr);
+
+    int columnCount(const QModelIndex &parent = {}) const override;
+    QVariant headerData(int section, Qt::Orientation orientation,
+                        int role = Qt::DisplayRole) const override;
+
+    const CoreRun &runAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+
+  protected:
+    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
+    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
+    void readRows(const CoreDataset &data, const std::string &hole) override;
+    db::EditableRow row(int r) const override { return runAt(r); }
+    QString cellText(int r, int column) const override;
+    bool isEditable(int column) const override { return column < Cored; }
+    TypedRow typed(int r, int column, const QString &text) const override;
+    QString editLabel(int r, int column) const override;
+
+  private:
+    std::vector<CoreRun> rows_;
+};
+
+/// Recovered over cored length in %, as shown (one decimal); empty for a run without length.
+QString recoveryText(const CoreRun &run);
+
+} // namespace atollog::view

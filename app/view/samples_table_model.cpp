@@ -1,0 +1,94 @@
+#include "view/samples_table_model.hpp"
+
+#include <algorithm>
+
+namespace atollog::view {
+
+namespace {
+
+const char *const kFieldNames[] = {"sample", "top_m", "base_m", "kind"};
+
+} // namespace
+
+SamplesTableModel::SamplesTableModel(DeskProject &desk, QObject *parent)
+    : DeskTableModel(desk, parent) {}
+
+int SamplesTableModel::columnCount(const QModelIndex &parent) const {
+    return parent.isValid() ? 0 : ColumnCount;
+}
+
+QVariant SamplesTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
+    if (orientation == Qt::Vertical) {
+        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+    }
+    if (section < 0 || section >= ColumnCount) {
+        return {};
+    }
+    const QString unit = unitSymbol(depthUnit());
+    if (role == Qt::DisplayRole) {
+        switch (section) {
+        case SampleId: return tr("Sample");
+        case Top: return tr("Top (%1)").arg(unit);
+        case Base: return tr("Base (%1)").arg(unit);
+        case Kind: return tr("Kind");
+        default: return {};
+        }
+    }
+    if (role == Qt::ToolTipRole) {
+        switch (section) {
+        case Base: return tr("Equal to the top for a point sample");
+        case Kind: return tr("A free word: core, cuttings, barren, ...");
+        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
+        }
+    }
+    return {};
+}
+
+int SamplesTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
+    return static_cast<int>(std::count_if(data.samples.begin(), data.samples.end(),
+                                          [&](const Sample &s) { return s.hole == hole; }));
+}
+
+void SamplesTableModel::readRows(const CoreDataset &data, const std::string &hole) {
+    rows_.clear();
+    for (const Sample &s : data.samples) {
+        if (s.hole == hole) {
+            rows_.push_back(s);
+        }
+    }
+}
+
+QString SamplesTableModel::cellText(int r, int column) const {
+    const Sample &s = sampleAt(r);
+    switch (column) {
+    case SampleId: return QString::fromStdString(s.sample);
+    case Top: return depthText(s.top_m, depthUnit());
+    case Base: return depthText(s.base_m, depthUnit());
+    case Kind: return QString::fromStdString(s.kind);
+    default: return {};
+    }
+}
+
+DeskTableModel::TypedRow SamplesTableModel::typed(int r, int column, const QString &text) const {
+    Sample s = sampleAt(r);
+    switch (column) {
+    case SampleId: s.sample = text.toStdString(); return db::EditableRow{s};
+    case Kind: s.kind = text.toStdString(); return db::EditableRow{s};
+    default: break;
+    }
+    const std::optional<double> number = readNumber(text);
+    if (!number) {
+        return tr("samples: sample '%1': %2: '%3' is not a number; type a depth in %4, e.g. 12.5")
+            .arg(QString::fromStdString(s.sample), headerData(column, Qt::Horizontal).toString(),
+                 text, unitSymbol(depthUnit()));
+    }
+    (column == Top ? s.top_m : s.base_m) = depthInMetres(*number, depthUnit());
+    return db::EditableRow{s};
+}
+
+QString SamplesTableModel::editLabel(int r, int column) const {
+    return tr("%1 of sample %2")
+        .arg(QLatin1String(kFieldNames[column]), QString::fromStdString(sampleAt(r).sample));
+}
+
+} // namespace atollog::view

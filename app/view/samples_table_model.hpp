@@ -1,0 +1,38 @@
+#pragma once
+// The samples of the chosen hole, in stored order: id, top and base in the desk's depth unit
+// (a point sample has base = top) and the kind word (core, cuttings, barren, ...).
+#include "view/desk_table_model.hpp"
+
+#include <vector>
+
+namespace atollog::view {
+
+class SamplesTableModel : public DeskTableModel {
+    Q_OBJECT
+
+  public:
+    enum Column { SampleId, Top, Base, Kind, ColumnCount };
+
+    explicit SamplesTableModel(DeskProject &desk, QObject *parent = nullptr);
+
+    int columnCount(const QModelIndex &parent = {}) const override;
+    QVariant headerData(int section, Qt::Orientation orientation,
+                        int role = Qt::DisplayRole) const override;
+
+    const Sample &sampleAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+
+  protected:
+    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
+    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
+    void readRows(const CoreDataset &data, const std::string &hole) override;
+    db::EditableRow row(int r) const override { return sampleAt(r); }
+    QString cellText(int r, int column) const override;
+    bool isEditable(int /*column*/) const override { return true; }
+    TypedRow typed(int r, int column, const QString &text) const override;
+    QString editLabel(int r, int column) const override;
+
+  private:
+    std::vector<Sample> rows_;
+};
+
+} // namespace atollog::view
