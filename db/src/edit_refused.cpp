@@ -15,7 +15,9 @@ std::string EditProblem::format() const {
     std::string text = table + ": " + key + ": ";
     if (!column.empty()) text += "column " + column + ", ";
     if (!value.empty()) text += "value '" + value + "', ";
-    text += problem;
+    // The engine's problem texts often begin with the row's name, which the key already gave.
+    const std::string lead = key + ": ";
+    text += problem.rfind(lead, 0) == 0 ? problem.substr(lead.size()) : problem;
     if (!fix.empty()) text += "; " + fix;
     return text;
 }

@@ -436,3 +436,13 @@ TEST_CASE("Malformed edits are programming errors", "[edits]") {
     RowEdit mixed = RowEdit::update(f.start.runs[0], f.start.samples[0]);
     CHECK_THROWS_AS(applyEdit(f.store, mixed), std::invalid_argument);
 }
+
+TEST_CASE("A refusal names the row once", "[unit][db][edits]") {
+    const db::EditProblem p{"runs", "run 'KV-1-R2' of hole 'KV-1'", "recovered_m", "-1",
+                            "run 'KV-1-R2' of hole 'KV-1': recovered_m -1 is negative",
+                            "give the recovered core length in metres"};
+    CHECK(p.format() == "runs: run 'KV-1-R2' of hole 'KV-1': column recovered_m, value '-1', "
+                        "recovered_m -1 is negative; give the recovered core length in metres");
+    const db::EditProblem other{"runs", "run 'A'", "", "", "overlaps run 'B'", ""};
+    CHECK(other.format() == "runs: run 'A': overlaps run 'B'");
+}
