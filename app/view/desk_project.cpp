@@ -1,6 +1,7 @@
 #include "view/desk_project.hpp"
 
 #include "atollog/db/project_store.hpp"
+#include "view/edit_batch.hpp"
 #include "view/edit_command.hpp"
 
 #include <QUndoStack>
@@ -54,9 +55,16 @@ void DeskProject::close() {
 }
 
 bool DeskProject::edit(const db::RowEdit &edit, const QString &label) {
+    return editAll({edit}, label);
+}
+
+bool DeskProject::editAll(const std::vector<db::RowEdit> &edits, const QString &label) {
     if (!store_) {
         setMessage(QStringLiteral("no project is open; open one first"), true);
         return false;
+    }
+    if (edits.empty()) {
+        return true; // nothing to write
     }
     EditCallbacks callbacks;
     callbacks.applied = [this](const QStringList &warnings) {
@@ -71,7 +79,9 @@ bool DeskProject::edit(const db::RowEdit &edit, const QString &label) {
         emit changed();
     };
     try {
-        const auto warnings = pushEdit(*stack_, *store_, edit, label, callbacks);
+        const auto warnings = edits.size() == 1
+                                  ? pushEdit(*stack_, *store_, edits.front(), label, callbacks)
+                                  : pushEdits(*stack_, *store_, edits, label, callbacks);
         reload();
         setMessage(problemLines(warnings).join(QLatin1Char('\n')), false);
         emit changed();

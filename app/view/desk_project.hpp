@@ -13,6 +13,7 @@
 #include <QString>
 
 #include <memory>
+#include <vector>
 
 class QUndoStack;
 
@@ -44,6 +45,8 @@ class DeskProject : public QObject {
     /// nothing was written, nothing pushed, and lastMessage says why (each problem naming
     /// table, row, field, value and fix). Warnings the edit brought in become the message too.
     bool edit(const db::RowEdit &edit, const QString &label);
+    /// Several edits of one gesture as one undo step, all or none (edit_batch.hpp).
+    bool editAll(const std::vector<db::RowEdit> &edits, const QString &label);
 
     /// Shows a refusal that did not come from applyEdit (e.g. no room for a new interval).
     void reportRefusal(const QString &message) { setMessage(message, true); }

@@ -119,12 +119,51 @@ bool DeskTableModel::setData(const QModelIndex &index, const QVariant &value, in
         }
         message = desk_.lastMessage();
     }
-    refused_cell_ = std::pair{r, index.column()};
-    refused_message_ = message;
-    const QModelIndex cell = this->index(r, index.column());
-    emit dataChanged(cell, cell, {kCellMessageRole, Qt::ToolTipRole, Qt::BackgroundRole});
-    emit editRefused(cell, message);
+    markRefused(r, index.column(), message);
     return false;
+}
+
+void DeskTableModel::markRefused(int r, int column, const QString &message) {
+    const QModelIndex cell = this->index(r, column);
+    if (cell.isValid()) { // the rows may have changed under a refusal (another writer)
+        refused_cell_ = std::pair{r, column};
+        refused_message_ = message;
+        emit dataChanged(cell, cell, {kCellMessageRole, Qt::ToolTipRole, Qt::BackgroundRole});
+    }
+    emit editRefused(cell, message);
+}
+
+bool DeskTableModel::removeRowAt(int r) {
+    if (r < 0 || r >= storedRowCount()) {
+        return false;
+    }
+    if (desk_.edit(db::RowEdit::remove(row(r)), tr("remove %1").arg(rowName(r)))) {
+        refused_cell_.reset();
+        return true; // the desk's changed() has reset the rows
+    }
+    markRefused(r, 0, desk_.lastMessage());
+    return false;
+}
+
+QModelIndex DeskTableModel::addRow() {
+    const TypedRow made = newRow();
+    if (const auto *why = std::get_if<QString>(&made)) {
+        desk_.reportRefusal(*why);
+        return {};
+    }
+    const db::EditableRow &added = std::get<db::EditableRow>(made);
+    const std::string_view table = tableName(db::tableOf(added));
+    const QString label = tr("add a row to %1")
+                              .arg(QString::fromUtf8(table.data(), static_cast<int>(table.size())));
+    if (!desk_.edit(db::RowEdit::add(added), label)) {
+        return {};
+    }
+    for (int r = storedRowCount() - 1; r >= 0; --r) {
+        if (row(r) == added) {
+            return index(r, firstNewRowColumn());
+        }
+    }
+    return {};
 }
 
 } // namespace atollog::view

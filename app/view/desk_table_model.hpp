@@ -36,6 +36,15 @@ class DeskTableModel : public QAbstractTableModel {
     bool setData(const QModelIndex &index, const QVariant &value, int role = Qt::EditRole) override;
     Qt::ItemFlags flags(const QModelIndex &index) const override;
 
+    /// Removes row `r` through the undo stack (undo puts it back in its place). False when it
+    /// was refused (e.g. other rows still refer to it): the row's first cell then carries the
+    /// message, as a refused edit does.
+    bool removeRowAt(int r);
+    /// Adds the table's new row (newRow: e.g. the next run below the deepest) through the undo
+    /// stack. Returns the new row's first editable cell, or an invalid index when there is
+    /// none or it was refused (the desk's lastMessage says why).
+    QModelIndex addRow();
+
   signals:
     /// An edit of this table was refused; the message names field, value and fix.
     void editRefused(const QModelIndex &index, const QString &message);
@@ -63,8 +72,16 @@ class DeskTableModel : public QAbstractTableModel {
     virtual QString cellToolTip(int /*r*/, int /*column*/) const { return {}; }
     /// A label for the undo stack, e.g. "base of interval 2.1-2.79 m".
     virtual QString editLabel(int r, int column) const = 0;
+    /// The row named for undo labels, e.g. "run KAL1-R03".
+    virtual QString rowName(int r) const { return tr("row %1").arg(r + 1); }
+    /// The row addRow adds (the hole's rows as read), or why there is none.
+    virtual TypedRow newRow() const { return tr("rows are not added in this table"); }
+    /// The column addRow opens for typing.
+    virtual int firstNewRowColumn() const { return 0; }
 
   private:
+    void markRefused(int r, int column, const QString &message);
+
     DeskProject &desk_;
     std::string hole_;
     DepthUnit unit_ = DepthUnit::Metre;

@@ -285,4 +285,17 @@ QModelIndex IntervalsTableModel::addInterval() {
     return {};
 }
 
+QString IntervalsTableModel::rowName(int r) const {
+    const LithInterval &v = intervalAt(r);
+    return tr("interval %1-%2 m").arg(word(numberText(v.top_m)), word(numberText(v.base_m)));
+}
+
+DeskTableModel::TypedRow IntervalsTableModel::newRow() const {
+    const NextInterval next = nextInterval(desk().data(), hole());
+    if (!next.interval) {
+        return QString::fromStdString(next.refusal);
+    }
+    return db::EditableRow{*next.interval};
+}
+
 } // namespace atollog::view

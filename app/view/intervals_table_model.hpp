@@ -45,6 +45,10 @@ class IntervalsTableModel : public DeskTableModel {
     bool isEditable(int column) const override { return column != Suggested; }
     TypedRow typed(int r, int column, const QString &text) const override;
     QString editLabel(int r, int column) const override;
+    QString rowName(int r) const override;
+    /// The same interval as addInterval (nextInterval), for the generic addRow.
+    TypedRow newRow() const override;
+    int firstNewRowColumn() const override { return Base; }
 
   private:
     std::vector<LithInterval> rows_;

@@ -1,6 +1,7 @@
 #include "view/runs_table_model.hpp"
 
 #include "view/desk_project.hpp"
+#include "view/next_id.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -109,6 +110,39 @@ DeskTableModel::TypedRow RunsTableModel::typed(int r, int column, const QString 
 QString RunsTableModel::editLabel(int r, int column) const {
     return tr("%1 of run %2")
         .arg(QLatin1String(kFieldNames[column]), QString::fromStdString(runAt(r).run));
+}
+
+QString RunsTableModel::rowName(int r) const {
+    return tr("run %1").arg(QString::fromStdString(runAt(r).run));
+}
+
+DeskTableModel::TypedRow RunsTableModel::newRow() const {
+    if (hole().empty()) {
+        return tr("runs: no hole is chosen; choose the hole to add a run to");
+    }
+    CoreRun run;
+    run.hole = hole();
+    const auto deepest = std::max_element(rows_.begin(), rows_.end(),
+                                          [](const CoreRun &a, const CoreRun &b) {
+                                              return a.base_m < b.base_m;
+                                          });
+    std::vector<std::string> taken;
+    for (const CoreRun &r : desk().data().runs) {
+        taken.push_back(r.run);
+    }
+    if (deepest == rows_.end()) {
+        run.top_m = 0;
+        run.base_m = kFirstRunLength_m;
+        run.run = nextId(hole() + "-R00", taken);
+    } else {
+        const double length_m = deepest->cored_m() > 0 ? deepest->cored_m() : kFirstRunLength_m;
+        run.top_m = deepest->base_m;
+        // Rounded to the micrometre, as typed lengths are (36.8 + 1.08 is not 37.88 in binary).
+        run.base_m = std::round((deepest->base_m + length_m) * 1e6) / 1e6;
+        run.run = nextId(deepest->run, taken);
+    }
+    run.recovered_m = 0;
+    return db::EditableRow{run};
 }
 
 } // namespace atollog::view

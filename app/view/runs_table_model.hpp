@@ -31,10 +31,18 @@ class RunsTableModel : public DeskTableModel {
     bool isEditable(int column) const override { return column < Cored; }
     TypedRow typed(int r, int column, const QString &text) const override;
     QString editLabel(int r, int column) const override;
+    QString rowName(int r) const override;
+    /// The next run: from the base of the hole's deepest run, as long as that run (the barrel
+    /// is usually the same), nothing recovered yet, its id counted on from that run's.
+    TypedRow newRow() const override;
+    int firstNewRowColumn() const override { return Base; }
 
   private:
     std::vector<CoreRun> rows_;
 };
+
+/// Length of a hole's first run when there is no run to take it from: our first guess, typed over.
+inline constexpr double kFirstRunLength_m = 1.0;
 
 /// Recovered over cored length in %, as shown (one decimal); empty for a run without length.
 QString recoveryText(const CoreRun &run);

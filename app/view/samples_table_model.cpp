@@ -1,5 +1,8 @@
 #include "view/samples_table_model.hpp"
 
+#include "view/desk_project.hpp"
+#include "view/next_id.hpp"
+
 #include <algorithm>
 
 namespace atollog::view {
@@ -89,6 +92,46 @@ DeskTableModel::TypedRow SamplesTableModel::typed(int r, int column, const QStri
 QString SamplesTableModel::editLabel(int r, int column) const {
     return tr("%1 of sample %2")
         .arg(QLatin1String(kFieldNames[column]), QString::fromStdString(sampleAt(r).sample));
+}
+
+QString SamplesTableModel::rowName(int r) const {
+    return tr("sample %1").arg(QString::fromStdString(sampleAt(r).sample));
+}
+
+DeskTableModel::TypedRow SamplesTableModel::newRow() const {
+    if (hole().empty()) {
+        return tr("samples: no hole is chosen; choose the hole to add a sample to");
+    }
+    Sample s;
+    s.hole = hole();
+    std::vector<std::string> taken;
+    for (const Sample &other : desk().data().samples) {
+        taken.push_back(other.sample);
+    }
+    const auto deepest = std::max_element(rows_.begin(), rows_.end(),
+                                          [](const Sample &a, const Sample &b) {
+                                              return a.base_m < b.base_m;
+                                          });
+    if (deepest != rows_.end()) {
+        s.top_m = s.base_m = deepest->base_m;
+        s.kind = deepest->kind;
+        s.sample = nextId(deepest->sample, taken);
+        return db::EditableRow{s};
+    }
+    const CoreRun *first = nullptr;
+    for (const CoreRun &r : desk().data().runs) {
+        if (r.hole == hole() && (!first || r.top_m < first->top_m)) {
+            first = &r;
+        }
+    }
+    if (!first) {
+        return tr("samples: hole '%1' has no core run, so a sample has no place yet; add the "
+                  "hole's first run first")
+            .arg(QString::fromStdString(hole()));
+    }
+    s.top_m = s.base_m = first->top_m;
+    s.sample = nextId(hole() + "-000", taken);
+    return db::EditableRow{s};
 }
 
 } // namespace atollog::view

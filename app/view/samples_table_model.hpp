@@ -30,6 +30,12 @@ class SamplesTableModel : public DeskTableModel {
     bool isEditable(int /*column*/) const override { return true; }
     TypedRow typed(int r, int column, const QString &text) const override;
     QString editLabel(int r, int column) const override;
+    QString rowName(int r) const override;
+    /// The next sample: at the base of the hole's deepest sample (a point, to be typed over; or
+    /// at the top of its first run when it has none), the kind of that sample, its id counted
+    /// on from that sample's.
+    TypedRow newRow() const override;
+    int firstNewRowColumn() const override { return Top; }
 
   private:
     std::vector<Sample> rows_;

@@ -1,0 +1,45 @@
+#pragma once
+// The project's biozones, in stored order, whatever hole is chosen: scheme, zone, and the
+// events bounding its base and top (ids of the events table; empty leaves that end open).
+#include "view/desk_table_model.hpp"
+
+#include <vector>
+
+namespace atollog::view {
+
+class ZonesTableModel : public DeskTableModel {
+    Q_OBJECT
+
+  public:
+    enum Column { Scheme, ZoneName, BaseEvent, TopEvent, ColumnCount };
+
+    explicit ZonesTableModel(DeskProject &desk, QObject *parent = nullptr);
+
+    int columnCount(const QModelIndex &parent = {}) const override;
+    QVariant headerData(int section, Qt::Orientation orientation,
+                        int role = Qt::DisplayRole) const override;
+    /// The event columns offer the project's event ids, "" first (kWordChoicesRole).
+    QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
+
+    const Zone &zoneAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+
+  protected:
+    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
+    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
+    void readRows(const CoreDataset &data, const std::string &hole) override;
+    db::EditableRow row(int r) const override { return zoneAt(r); }
+    QString cellText(int r, int column) const override;
+    bool isEditable(int /*column*/) const override { return true; }
+    TypedRow typed(int r, int column, const QString &text) const override;
+    QString editLabel(int r, int column) const override;
+    QString rowName(int r) const override;
+    /// The next zone of the last zone's scheme: its name counted on (VL4 -> VL5), based on
+    /// the event that tops the last zone, its top open, to be typed.
+    TypedRow newRow() const override;
+    int firstNewRowColumn() const override { return TopEvent; }
+
+  private:
+    std::vector<Zone> rows_;
+};
+
+} // namespace atollog::view
