@@ -1,12 +1,12 @@
 // atollog-view: the correlation panel of a project on screen. `atollog-view [project]`.
+#include "view/guarded_application.hpp"
 #include "view/main_window.hpp"
 
-#include <QApplication>
 #include <QCommandLineParser>
 #include <QTimer>
 
 int main(int argc, char *argv[]) {
-    QApplication app(argc, argv);
+    atollog::view::GuardedApplication app(argc, argv);
     QApplication::setOrganizationName(QStringLiteral("atollog"));
     QApplication::setApplicationName(QStringLiteral("atollog-view"));
     QApplication::setApplicationVersion(QStringLiteral("0.1.0"));

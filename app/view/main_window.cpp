@@ -3,6 +3,7 @@
 #include "cli/figure_file.hpp"
 #include "draw/panel_layout.hpp"
 #include "view/exception_text.hpp"
+#include "atollog/db/project_store.hpp"
 #include "view/figure_window.hpp"
 #include "view/logging_desk.hpp"
 #include "view/panel_canvas.hpp"
@@ -165,6 +166,8 @@ void MainWindow::buildToolBar() {
 
 void MainWindow::buildMenus() {
     QMenu *file = menuBar()->addMenu(tr("&File"));
+    QAction *create = file->addAction(tr("&New project..."), this, &MainWindow::chooseAndCreate);
+    create->setShortcut(QKeySequence::New);
     QAction *open = file->addAction(tr("&Open project..."), this, &MainWindow::chooseAndOpen);
     open->setShortcut(QKeySequence::Open);
     QAction *reopen = file->addAction(tr("&Reopen last project"), this, [this] {
@@ -177,6 +180,10 @@ void MainWindow::buildMenus() {
     recent_menu_ = file->addMenu(tr("Recent &projects"));
     recent_menu_->setObjectName(QStringLiteral("recent-menu"));
     refreshRecentMenu();
+    file->addSeparator();
+    file->addAction(tr("&Import folder..."), this, &MainWindow::chooseAndImport);
+    file->addAction(tr("Export &folder..."), this, &MainWindow::chooseAndExportFolder);
+    file->addSeparator();
     QAction *exporting = file->addAction(tr("&Export..."), this, &MainWindow::chooseAndExport);
     exporting->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_E));
     file->addSeparator();
@@ -219,6 +226,11 @@ bool MainWindow::openProject(const QString &path) {
 bool MainWindow::showProjectPanel(const QString &path, bool keep_choice) {
     QApplication::setOverrideCursor(Qt::WaitCursor);
     try {
+        if (!db::ProjectStore::open(path.toStdString()).hasData()) {
+            QApplication::restoreOverrideCursor();
+            showEmptyProject(path);
+            return true;
+        }
         ProjectPanel panel = loadProjectPanel(path.toStdString());
         QApplication::restoreOverrideCursor();
         PanelChoice choice;

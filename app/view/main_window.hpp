@@ -42,6 +42,17 @@ class MainWindow : public QMainWindow {
     PanelCanvas *canvas() const { return canvas_; }
     SidePane *sidePane() const { return side_; }
     LoggingDesk *loggingDesk() const { return desk_; }
+    /// File actions without their dialogs (main_window_files.cpp); each reports a failure
+    /// through the message sink and returns false, leaving the project as it was.
+    /// A new, empty project at `path` (which must not exist), opened.
+    bool createProject(const QString &path);
+    /// Reads a core data folder into the open project (all or nothing) and shows the result;
+    /// a project that holds data is refused unless `replace`.
+    bool importFolder(const QString &folder, bool replace);
+    /// Writes the open project as a core data folder; a non-empty folder needs `overwrite`.
+    bool exportFolder(const QString &folder, bool overwrite);
+    const QString &projectPath() const { return project_path_; }
+
     /// The figures window (age-depth, rates, subsidence, ...) of the open project, shown.
     FigureWindow *showFigures();
     /// Paths of the projects opened lately, newest first (at most kRecentProjects).
@@ -69,6 +80,11 @@ class MainWindow : public QMainWindow {
     void relayout();
     void refreshFlattenChoices();
     void chooseAndOpen();
+    void chooseAndCreate();
+    void chooseAndImport();
+    void chooseAndExportFolder();
+    /// Shows an open project that holds no data yet: no panel, the desk open.
+    void showEmptyProject(const QString &path);
     void chooseAndExport();
     void onItemSelected(draw::ItemRole role, const QString &key);
     void onColumnOrderChanged(const QList<int> &order);

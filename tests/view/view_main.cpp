@@ -4,6 +4,8 @@
 #define CATCH_CONFIG_RUNNER
 #include <catch2/catch.hpp>
 
+#include "view/guarded_application.hpp"
+
 #include <QApplication>
 #include <QStandardPaths>
 
@@ -11,7 +13,11 @@ int main(int argc, char *argv[]) {
     if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) {
         qputenv("QT_QPA_PLATFORM", "offscreen");
     }
-    QApplication app(argc, argv);
+    // The viewer's own application class, so its error guard is what the tests run under;
+    // caught errors go to stderr here instead of a modal box (test_guarded_application.cpp
+    // sets its own sink).
+    atollog::view::GuardedApplication app(argc, argv);
+    app.setErrorSink([](const QString &text) { qWarning("%s", qPrintable(text)); });
     QApplication::setOrganizationName(QStringLiteral("atollog-tests"));
     QApplication::setApplicationName(QStringLiteral("view_tests"));
     QStandardPaths::setTestModeEnabled(true);
