@@ -172,13 +172,13 @@ std::vector<HoleModelInputs> gatherAgeModelInputs(const CoreDataset& data,
 }
 
 AgeModel buildHoleModel(const HoleModelInputs& in, const AgeModelOptions& options,
-                        const std::vector<double>& keep_draws_at_m) {
+                        const std::vector<double>& keep_draws_at_m, const WorkProgress& progress) {
     AgeModelSettings s = options.settings();
     s.hiatus_depths_m = in.hiatus_depths_m;
     s.rate_intervals = in.packages;
     s.basement_contact_m = in.basement_contact_m;
     s.section_base_m = in.section_base_m;
-    return buildAgeModel(in.hole, in.ties, s, keep_draws_at_m);
+    return buildAgeModel(in.hole, in.ties, s, keep_draws_at_m, progress);
 }
 
 } // namespace atollog::cli

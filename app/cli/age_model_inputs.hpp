@@ -57,8 +57,10 @@ std::vector<HoleModelInputs> gatherAgeModelInputs(const CoreDataset& data,
                                                   const AgeModelOptions& options,
                                                   const std::string& hole);
 
-/// Builds the model of one hole with the options' settings, its hiatus depths and packages.
+/// Builds the model of one hole with the options' settings, its hiatus depths and packages;
+/// `progress` as buildAgeModel's (WorkStopped when it says stop).
 AgeModel buildHoleModel(const HoleModelInputs& in, const AgeModelOptions& options,
-                        const std::vector<double>& keep_draws_at_m = {});
+                        const std::vector<double>& keep_draws_at_m = {},
+                        const WorkProgress& progress = {});
 
 } // namespace atollog::cli

@@ -41,13 +41,14 @@ db::StoredAgeModel toStored(const AgeModel& m, const HoleModelInputs& in, const 
 } // namespace
 
 AgeModelRun buildAgeModels(const CoreDataset& data, const AgeModelOptions& options,
-                           const std::string& hole, const PhaseReport& phase) {
+                           const std::string& hole, const PhaseReport& phase,
+                           const WorkProgress& step) {
     AgeModelRun run;
     run.inputs = gatherAgeModelInputs(data, options, hole);
     for (const auto& in : run.inputs) {
         reportPhase(phase, "age model of " + in.hole + " (" + std::to_string(in.ties.size()) +
                                " ties)");
-        run.models.push_back(buildHoleModel(in, options));
+        run.models.push_back(stoppable([&] { return buildHoleModel(in, options, {}, step); }));
     }
     return run;
 }

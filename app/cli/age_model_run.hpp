@@ -22,11 +22,12 @@ struct AgeModelRun {
     std::vector<AgeModel> models; ///< one per input, same order
 };
 
-/// Builds the model of every hole with ties (or only `hole`), reporting a phase per hole.
-/// Throws AnalysisStopped when the report says stop, std::invalid_argument as
-/// gatherAgeModelInputs does.
+/// Builds the model of every hole with ties (or only `hole`), reporting a phase per hole and,
+/// within it, each block of draws to `step`. Throws AnalysisStopped when either says stop,
+/// std::invalid_argument as gatherAgeModelInputs does.
 AgeModelRun buildAgeModels(const CoreDataset& data, const AgeModelOptions& options,
-                           const std::string& hole, const PhaseReport& phase = {});
+                           const std::string& hole, const PhaseReport& phase = {},
+                           const WorkProgress& step = {});
 
 /// The most likely outlier: a tie whose posterior sits far in its own tail, else the tie whose
 /// removal raises acceptance most, when either passes its threshold.

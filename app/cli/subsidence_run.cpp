@@ -11,7 +11,8 @@ namespace atollog::cli {
 std::vector<HoleSubsidence> computeSubsidence(const CoreDataset& data,
                                               const AgeModelOptions& options,
                                               const std::string& hole_id,
-                                              const PhaseReport& phase) {
+                                              const PhaseReport& phase,
+                                              const WorkProgress& step) {
     const SeaLevelCurve sea_level =
         data.sea_level.empty() ? SeaLevelCurve{} : SeaLevelCurve(data.sea_level);
     std::unordered_map<std::string, const Hole*> holes;
@@ -44,7 +45,7 @@ std::vector<HoleSubsidence> computeSubsidence(const CoreDataset& data,
         for (const auto& t : targets) keep.push_back(t.sample->top_m);
         reportPhase(phase, "age model of " + in.hole + " at " + std::to_string(keep.size()) +
                                " samples");
-        const AgeModel m = buildHoleModel(in, options, keep);
+        const AgeModel m = stoppable([&] { return buildHoleModel(in, options, keep, step); });
         for (std::size_t i = 0; i < targets.size(); ++i) {
             const auto& t = targets[i];
             SampleSubsidence s{t.sample,

@@ -30,11 +30,13 @@ struct HoleSubsidence {
 };
 
 /// Every hole with ties (or only `hole`), with the samples that lie in an interval with a
-/// logged water depth and above the deepest tie. `data` must outlive the result.
+/// logged water depth and above the deepest tie. `data` must outlive the result. A phase per
+/// hole's age model, its blocks of draws to `step`; AnalysisStopped when either says stop.
 std::vector<HoleSubsidence> computeSubsidence(const CoreDataset& data,
                                               const AgeModelOptions& options,
                                               const std::string& hole,
-                                              const PhaseReport& phase = {});
+                                              const PhaseReport& phase = {},
+                                              const WorkProgress& step = {});
 
 /// The subsidence-against-age figure of the holes that have a point.
 draw::SubsidencePlotInput subsidencePlotInput(const std::vector<HoleSubsidence>& holes);

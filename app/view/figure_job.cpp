@@ -35,8 +35,14 @@ void FigureJob::run() {
         QMetaObject::invokeMethod(this, [this, q] { emit phase(q); }, Qt::QueuedConnection);
         return !stop_.load();
     };
+    const auto step = [this](std::size_t done, std::size_t total) {
+        const int d = static_cast<int>(done), t = static_cast<int>(total);
+        QMetaObject::invokeMethod(this, [this, d, t] { emit progressed(d, t); },
+                                  Qt::QueuedConnection);
+        return !stop_.load();
+    };
     try {
-        FigureResult r = makeFigure(project_.toStdString(), request_, *cache_, report);
+        FigureResult r = makeFigure(project_.toStdString(), request_, *cache_, report, step);
         {
             const std::lock_guard lock(result_mutex_);
             result_ = std::move(r);

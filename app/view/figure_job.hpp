@@ -1,7 +1,8 @@
 #pragma once
-// One figure computed on a worker thread: the window stays live, shows each phase, and can
-// stop the work. Stopping takes effect at the next phase (an age model, once begun, runs to its
-// end) and nothing of a stopped job is stored: the store step is a phase of its own.
+// One figure computed on a worker thread: the window stays live, shows each phase and how far
+// an age model's draws are, and can stop the work. Stopping takes effect at the next phase or
+// the next block of an age model's draws (512 draws, or one leave-one-out run), and nothing of
+// a stopped job is stored: the store step is a phase of its own.
 #include "view/figure_request.hpp"
 
 #include <QObject>
@@ -31,6 +32,8 @@ class FigureJob : public QObject {
 
   signals:
     void phase(const QString &text);
+    /// `done` of `total` blocks of the current phase's age model (a new phase starts unknown).
+    void progressed(int done, int total);
     void finished();
     void failed(const QString &message);
     void cancelled();

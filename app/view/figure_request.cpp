@@ -40,12 +40,12 @@ struct ModelsFor {
 /// The hole's age-model run: from the cache, else built and stored.
 ModelsFor ageModelsFor(db::ProjectStore& store, const CoreDataset& data,
                        const FigureRequest& r, AgeModelCache& cache,
-                       const cli::PhaseReport& phase) {
+                       const cli::PhaseReport& phase, const WorkProgress& step) {
     const db::ModelRunRecord record = cli::ageModelRunRecord(data, r.model, r.hole);
     const std::string key = record.inputs_sha256 + "\n" + record.settings;
     if (auto run = cache.find(key)) return {run, "age model reused from this session"};
     auto run = std::make_shared<const cli::AgeModelRun>(
-        cli::buildAgeModels(data, r.model, r.hole, phase));
+        cli::buildAgeModels(data, r.model, r.hole, phase, step));
     cli::reportPhase(phase, "storing the age model with its provenance");
     const cli::StoredRunOutcome stored = cli::storeAgeModelRun(store, data, r.model, r.hole, *run);
     cache.keep(key, run);
@@ -101,7 +101,8 @@ std::size_t AgeModelCache::size() const {
 }
 
 FigureResult makeFigure(const std::filesystem::path& project, const FigureRequest& r,
-                        AgeModelCache& cache, const cli::PhaseReport& phase) {
+                        AgeModelCache& cache, const cli::PhaseReport& phase,
+                        const WorkProgress& step) {
     cli::reportPhase(phase, "reading the project");
     db::ProjectStore store = db::ProjectStore::open(project);
     const CoreDataset data = store.loadDataset();
@@ -109,7 +110,7 @@ FigureResult makeFigure(const std::filesystem::path& project, const FigureReques
     switch (r.kind) {
     case FigureKind::AgeDepth: {
         requireHole(data, r.hole, "a hole");
-        const ModelsFor m = ageModelsFor(store, data, r, cache, phase);
+        const ModelsFor m = ageModelsFor(store, data, r, cache, phase, step);
         const draw::AgeDepthPlotInput p =
             cli::ageDepthPlotInput(m.run->models.front(), m.run->inputs.front());
         out.list = draw::layoutAgeDepthPlot(p, cli::ageDepthPlotStyle(p, false));
@@ -129,7 +130,7 @@ FigureResult makeFigure(const std::filesystem::path& project, const FigureReques
     case FigureKind::RatesDepth:
     case FigureKind::RatesAge: {
         requireHole(data, r.hole, "a hole");
-        const ModelsFor m = ageModelsFor(store, data, r, cache, phase);
+        const ModelsFor m = ageModelsFor(store, data, r, cache, phase, step);
         const auto along = r.kind == FigureKind::RatesAge ? draw::RatePlotAlong::Age
                                                           : draw::RatePlotAlong::Depth;
         const draw::RatePlotInput p = cli::ratePlotInput(m.run->models.front(), along);
@@ -142,7 +143,7 @@ FigureResult makeFigure(const std::filesystem::path& project, const FigureReques
         break;
     }
     case FigureKind::Subsidence: {
-        const auto holes = cli::computeSubsidence(data, r.model, "", phase);
+        const auto holes = cli::computeSubsidence(data, r.model, "", phase, step);
         const draw::SubsidencePlotInput p = cli::subsidencePlotInput(holes);
         if (p.holes.empty())
             throw std::invalid_argument("no hole has a sample in an interval with a logged water "

@@ -60,9 +60,11 @@ class AgeModelCache {
 /// Opens `project` (its own connection: this may run on any thread), computes the figure and
 /// lays it out. Age-depth and rate figures store their model run with its provenance unless
 /// the newest run has the same settings, seed and inputs. Reports a phase before each long
-/// step; throws cli::AnalysisStopped when the report says stop, std::invalid_argument (or a
-/// db::ProjectError) with a message naming what to fix.
+/// step, and each block of an age model's draws to `step`; throws cli::AnalysisStopped when
+/// either says stop, std::invalid_argument (or a db::ProjectError) with a message naming what
+/// to fix.
 FigureResult makeFigure(const std::filesystem::path& project, const FigureRequest& request,
-                        AgeModelCache& cache, const cli::PhaseReport& phase = {});
+                        AgeModelCache& cache, const cli::PhaseReport& phase = {},
+                        const WorkProgress& step = {});
 
 } // namespace atollog::view

@@ -72,7 +72,7 @@ FigureWindow::FigureWindow(QWidget *parent)
     buttons->addWidget(export_button_);
 
     progress_ = new QProgressBar(this);
-    progress_->setRange(0, 0); // the phases have no known length: a busy bar
+    progress_->setRange(0, 0); // busy until a phase says how long it is (an age model's draws)
     progress_->setVisible(false);
     status_ = new QLabel(this);
     status_->setWordWrap(true);
@@ -158,7 +158,14 @@ bool FigureWindow::draw() {
     job_ = new FigureJob(project_, r, cache_);
     auto clock = std::make_shared<QElapsedTimer>();
     clock->start();
-    connect(job_, &FigureJob::phase, this, [this](const QString &text) { setStatus(text + "...", false); });
+    connect(job_, &FigureJob::phase, this, [this](const QString &text) {
+        progress_->setRange(0, 0); // a new phase: busy until it reports its length
+        setStatus(text + "...", false);
+    });
+    connect(job_, &FigureJob::progressed, this, [this](int done, int total) {
+        progress_->setRange(0, total);
+        progress_->setValue(done);
+    });
     connect(job_, &FigureJob::finished, this, [this, clock] {
         std::optional<FigureResult> result = job_->takeResult();
         endJob();
@@ -206,7 +213,7 @@ void FigureWindow::stop() {
     if (job_ != nullptr) {
         job_->cancel();
         stop_button_->setEnabled(false);
-        setStatus(tr("Stopping after the current step..."), false);
+        setStatus(tr("Stopping after the current block of draws..."), false);
     }
 }
 
@@ -216,6 +223,7 @@ void FigureWindow::endJob() {
     draw_button_->setEnabled(true);
     stop_button_->setEnabled(false);
     progress_->setVisible(false);
+    progress_->setRange(0, 0);
 }
 
 bool FigureWindow::exportTo(const QString &path) {

@@ -54,6 +54,7 @@ class FigureWindow : public QWidget {
     QPushButton *drawButton() const { return draw_button_; }
     QPushButton *stopButton() const { return stop_button_; }
     QLabel *statusLabel() const { return status_; }
+    QProgressBar *progressBar() const { return progress_; }
     const QString &shownTitle() const { return shown_title_; }
 
   signals:

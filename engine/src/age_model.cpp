@@ -10,6 +10,7 @@
 #include "age_profile.hpp"
 #include "draw_seeds.hpp"
 #include "parallel_blocks.hpp"
+#include "progress_counter.hpp"
 
 #include "atollog/engine/streaming_quantiles.hpp"
 
@@ -95,7 +96,7 @@ std::size_t chainCount(std::size_t n, std::size_t chain) {
 }
 
 /// Pilot run (its own stream): the histogram ranges.
-Columns pilotColumns(const PreparedModel& m, const AgeModelSettings& s) {
+Columns pilotColumns(const PreparedModel& m, const AgeModelSettings& s, ProgressCounter& progress) {
     const std::size_t n = std::min(static_cast<std::size_t>(s.draws), kPilotDraws);
     const std::size_t chains = chainsFor(n);
     const std::size_t threads =
@@ -123,6 +124,7 @@ Columns pilotColumns(const PreparedModel& m, const AgeModelSettings& s) {
                          [&](std::size_t k, double v) { hiatus[t].add(k, v); },
                          [&](std::size_t k, double v) { rates[t].add(k, v); });
                  });
+        progress.advance();
     });
     for (std::size_t t = 1; t < threads; ++t) {
         grid[0].merge(grid[t]);
@@ -157,7 +159,7 @@ struct PassResult {
 /// The main pass: every kept draw, weight 1, into the streaming quantiles; ages at the kept
 /// depths stored per draw.
 PassResult mainPass(const PreparedModel& m, const AgeModelSettings& s, const Columns& columns,
-                    std::vector<std::vector<double>>& kept) {
+                    std::vector<std::vector<double>>& kept, ProgressCounter& progress) {
     const std::size_t n = static_cast<std::size_t>(s.draws);
     const std::size_t chains = chainsFor(n);
     const std::size_t threads =
@@ -203,6 +205,7 @@ PassResult mainPass(const PreparedModel& m, const AgeModelSettings& s, const Col
                          [&](std::size_t k, double v) { a.rates.add(k, v, 1); });
                  });
         flush();
+        progress.advance();
     });
     for (std::size_t t = 1; t < threads; ++t)
         acc[0].merge(acc[t]);
@@ -213,12 +216,16 @@ PassResult mainPass(const PreparedModel& m, const AgeModelSettings& s, const Col
 
 AgeModel buildAgeModel(const std::string& hole, std::vector<AgeTie> ties,
                        const AgeModelSettings& settings,
-                       const std::vector<double>& keep_draws_at_m) {
+                       const std::vector<double>& keep_draws_at_m, const WorkProgress& report) {
     const PreparedModel m = prepareAgeModel(hole, ties, settings, keep_draws_at_m);
-    const Columns columns = pilotColumns(m, settings);
     const std::size_t n = static_cast<std::size_t>(settings.draws);
+    // Blocks: the pilot's chains, the main pass's chains, one leave-one-out run per tie.
+    const std::size_t outlier_blocks = settings.outlier_draws > 0 ? outlierRuns(m.ties) : 0;
+    ProgressCounter progress(report, chainsFor(std::min(n, kPilotDraws)) + chainsFor(n) +
+                                         outlier_blocks);
+    const Columns columns = pilotColumns(m, settings, progress);
     std::vector<std::vector<double>> kept(m.kept_m.size(), std::vector<double>(n));
-    const PassResult pass = mainPass(m, settings, columns, kept);
+    const PassResult pass = mainPass(m, settings, columns, kept, progress);
     const double total = static_cast<double>(n);
 
     AgeModel out;
@@ -291,7 +298,8 @@ AgeModel buildAgeModel(const std::string& hole, std::vector<AgeTie> ties,
 
     if (settings.outlier_draws > 0)
         out.outlier_ranking =
-            rankTieInfluence(m.ties, settings.outlier_draws, settings.seed, settings.threads);
+            rankTieInfluence(m.ties, settings.outlier_draws, settings.seed, settings.threads,
+                             &progress);
     return out;
 }
 

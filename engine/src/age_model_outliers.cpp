@@ -3,6 +3,7 @@
 #include "age_model_draw.hpp"
 #include "draw_seeds.hpp"
 #include "parallel_blocks.hpp"
+#include "progress_counter.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -37,8 +38,14 @@ double log10MeanWeight(const std::vector<PreparedTie>& ties, int skip, int draws
     return std::max(log10_mean, kLog10Floor);
 }
 
+std::size_t outlierRuns(const std::vector<PreparedTie>& ties) {
+    return static_cast<std::size_t>(std::count_if(
+        ties.begin(), ties.end(), [](const PreparedTie& t) { return !t.is_core_top; }));
+}
+
 std::vector<TieInfluence> rankTieInfluence(const std::vector<PreparedTie>& ties, int draws,
-                                           std::uint64_t seed, int threads) {
+                                           std::uint64_t seed, int threads,
+                                           ProgressCounter* progress) {
     const double with_all = log10MeanWeight(ties, -1, draws, seed);
     std::vector<TieInfluence> out(ties.size());
     runBlocks(ties.size(), threads, [&](std::size_t k, std::size_t) {
@@ -47,6 +54,8 @@ std::vector<TieInfluence> rankTieInfluence(const std::vector<PreparedTie>& ties,
         const double without = log10MeanWeight(ties, static_cast<int>(k), draws, seed);
         out[k] = {ties[k].label, without, without - with_all,
                   without - with_all >= kConflictGainLog10};
+        if (progress)
+            progress->advance();
     });
     std::vector<TieInfluence> ranked;
     for (std::size_t k = 0; k < ties.size(); ++k)

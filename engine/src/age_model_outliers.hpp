@@ -1,6 +1,7 @@
 #pragma once
 // Leave-one-out search for ties that conflict with the others.
 #include "age_model_inputs.hpp"
+#include "progress_counter.hpp"
 
 #include "atollog/engine/age_model.hpp"
 
@@ -14,10 +15,15 @@ namespace atollog::detail {
 double log10MeanWeight(const std::vector<PreparedTie>& ties, int skip, int draws,
                        std::uint64_t seed);
 
+/// How many leave-one-out runs rankTieInfluence makes: one per tie but the core top.
+std::size_t outlierRuns(const std::vector<PreparedTie>& ties);
+
 /// Every tie but the core top, by how much leaving it out raises the acceptance rate, largest
 /// first (equal gains: input order). All runs share the same seed (common random numbers), so
-/// differences between ties are not noise between streams.
+/// differences between ties are not noise between streams. `progress` (may be null) advances
+/// once per run.
 std::vector<TieInfluence> rankTieInfluence(const std::vector<PreparedTie>& ties, int draws,
-                                           std::uint64_t seed, int threads);
+                                           std::uint64_t seed, int threads,
+                                           ProgressCounter* progress = nullptr);
 
 } // namespace atollog::detail

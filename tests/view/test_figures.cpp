@@ -1,6 +1,7 @@
 // The viewer's figures: each kind drawn from the demo project by the same code as the
 // commands' --plot (an exported SVG is byte for byte the command's), age models stored once
-// with their provenance and reused, and a stopped job stores nothing.
+// with their provenance and reused, and a stopped job stores nothing, also when stopped in the
+// middle of an age model's draws.
 #include "cli/cli_runner.hpp"
 
 #include "view/figure_request.hpp"
@@ -13,6 +14,7 @@
 #include <QCheckBox>
 #include <QComboBox>
 #include <QLabel>
+#include <QProgressBar>
 #include <QPushButton>
 #include <QSignalSpy>
 #include <QSpinBox>
@@ -169,6 +171,21 @@ TEST_CASE("A stopped figure stores nothing", "[view][figures]") {
         CHECK(cache.size() == 0);
     }
 
+    // Inside the age model: the draws report their blocks; a stop at the third ends the model.
+    std::vector<std::size_t> done;
+    std::size_t total = 0;
+    CHECK_THROWS_AS(view::makeFigure(demo.project, demoRequest(FigureKind::AgeDepth), cache, {},
+                                     [&](std::size_t d, std::size_t t) {
+                                         done.push_back(d);
+                                         total = t;
+                                         return d < 3;
+                                     }),
+                    cli::AnalysisStopped);
+    CHECK(done == std::vector<std::size_t>{0, 1, 2, 3});
+    CHECK(total > 3);
+    CHECK(demo.modelRuns("age-model") == 0);
+    CHECK(cache.size() == 0);
+
     // In the window: Stop right after Draw ends the job with nothing stored, whichever phase
     // the worker had reached (a long model is stopped before it is stored).
     view::FigureWindow window;
@@ -184,6 +201,25 @@ TEST_CASE("A stopped figure stores nothing", "[view][figures]") {
     CHECK(demo.modelRuns("age-model") == 0);
     CHECK_FALSE(window.busy());
     CHECK(window.drawButton()->isEnabled());
+
+    // Stopped while the bar shows the model's draws: it stops part way, long before its end.
+    QProgressBar *bar = window.progressBar();
+    int last_done = 0, last_total = 0;
+    QObject::connect(bar, &QProgressBar::valueChanged, [&](int v) {
+        if (v > 0) { // not the resets between phases and at the end
+            last_done = v;
+            last_total = bar->maximum();
+        }
+    });
+    REQUIRE(window.draw());
+    for (int i = 0; i < 6000 && last_done < 2; ++i) QTest::qWait(10);
+    REQUIRE(last_done >= 2); // the bar moved: a length is known
+    CHECK(bar->maximum() > 400); // 200,000 draws: about 391 chains of 512 and the pilot's
+    window.stop();
+    REQUIRE(ended.wait(300000));
+    CHECK(window.statusLabel()->text() == "Stopped; nothing was stored.");
+    CHECK(last_done < last_total / 2);
+    CHECK(demo.modelRuns("age-model") == 0);
 }
 
 TEST_CASE("A figure that cannot be drawn says why in the window", "[view][figures][bad-input]") {

@@ -36,6 +36,7 @@
 #include "atollog/engine/accretion_rates.hpp"
 #include "atollog/engine/age_model_settings.hpp"
 #include "atollog/engine/age_tie.hpp"
+#include "atollog/engine/work_progress.hpp"
 
 #include <cstddef>
 #include <cstdint>
@@ -132,8 +133,12 @@ struct AgeModel {
 /// outside the grid, a core top age or sd not finite (sd < 0), burn_in_sweeps outside
 /// 0 .. 1,000,000, thin outside 1 .. 1000, acceptance_draws outside 1 .. 10,000,000. Ties that
 /// conflict do not throw: see tie_tails and outlier_ranking.
+/// `progress` is told of each block of work done: a chain of the pilot and of the main pass
+/// (512 kept draws each), a leave-one-out run per tie; when it returns false the model stops at
+/// the next block and WorkStopped is thrown. It never changes the result.
 AgeModel buildAgeModel(const std::string& hole, std::vector<AgeTie> ties,
                        const AgeModelSettings& settings,
-                       const std::vector<double>& keep_draws_at_m = {});
+                       const std::vector<double>& keep_draws_at_m = {},
+                       const WorkProgress& progress = {});
 
 } // namespace atollog
