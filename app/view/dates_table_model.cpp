@@ -24,50 +24,38 @@ QString optionalText(const std::optional<double> &v) { return v ? exactNumberTex
 
 DatesTableModel::DatesTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
 
-int DatesTableModel::columnCount(const QModelIndex &parent) const {
-    return parent.isValid() ? 0 : ColumnCount;
+QString DatesTableModel::columnTitle(int column) const {
+    switch (column) {
+    case SampleId: return tr("Sample");
+    case Depth: return tr("Depth (%1)").arg(unitSymbol(depthUnit()));
+    case Method: return tr("Method");
+    case Age: return tr("Age (Ma)");
+    case AgeSd: return tr("Age sd (Ma)");
+    case UThRatios: return tr("²³⁰Th/²³⁸U ± sd; ²³⁴U/²³⁸U ± sd (activity)");
+    case Th232: return tr("²³²Th (ppb)");
+    case U238: return tr("²³⁸U (ppb)");
+    case F14C: return tr("F¹⁴C ± sd");
+    case DeltaR: return tr("ΔR ± sd (yr)");
+    default: return {};
+    }
 }
 
-QVariant DatesTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
-    if (orientation == Qt::Vertical) {
-        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+QString DatesTableModel::columnTip(int column) const {
+    switch (column) {
+    case SampleId: return tr("The dated sample of this hole; or clear it and give the depth");
+    case Depth: return tr("The dated depth when no sample is given");
+    case Method: return tr("One of: %1").arg(word(allowedWords<DateMethod>()));
+    case UThRatios:
+        return tr("Both activity ratios with their one-sd uncertainties, e.g. "
+                  "'0.0123 ± 0.0002; 1.145 ± 0.003'; clear to remove the measurement. "
+                  "Stored as %1")
+            .arg(QLatin1String(kFieldNames[column]));
+    case F14C:
+        return tr("Fraction modern with its one sd, e.g. '0.77094 ± 0.00251'; clear to "
+                  "remove the measurement");
+    case DeltaR: return tr("Local marine reservoir offset with its one sd, years; optional");
+    default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
     }
-    if (section < 0 || section >= ColumnCount) {
-        return {};
-    }
-    if (role == Qt::DisplayRole) {
-        switch (section) {
-        case SampleId: return tr("Sample");
-        case Depth: return tr("Depth (%1)").arg(unitSymbol(depthUnit()));
-        case Method: return tr("Method");
-        case Age: return tr("Age (Ma)");
-        case AgeSd: return tr("Age sd (Ma)");
-        case UThRatios: return tr("²³⁰Th/²³⁸U ± sd; ²³⁴U/²³⁸U ± sd (activity)");
-        case Th232: return tr("²³²Th (ppb)");
-        case U238: return tr("²³⁸U (ppb)");
-        case F14C: return tr("F¹⁴C ± sd");
-        case DeltaR: return tr("ΔR ± sd (yr)");
-        default: return {};
-        }
-    }
-    if (role == Qt::ToolTipRole) {
-        switch (section) {
-        case SampleId: return tr("The dated sample of this hole; or clear it and give the depth");
-        case Depth: return tr("The dated depth when no sample is given");
-        case Method: return tr("One of: %1").arg(word(allowedWords<DateMethod>()));
-        case UThRatios:
-            return tr("Both activity ratios with their one-sd uncertainties, e.g. "
-                      "'0.0123 ± 0.0002; 1.145 ± 0.003'; clear to remove the measurement. "
-                      "Stored as %1")
-                .arg(QLatin1String(kFieldNames[section]));
-        case F14C:
-            return tr("Fraction modern with its one sd, e.g. '0.77094 ± 0.00251'; clear to "
-                      "remove the measurement");
-        case DeltaR: return tr("Local marine reservoir offset with its one sd, years; optional");
-        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
-        }
-    }
-    return {};
 }
 
 QVariant DatesTableModel::data(const QModelIndex &index, int role) const {
@@ -135,7 +123,7 @@ QString DatesTableModel::cellText(int r, int column) const {
 
 DeskTableModel::TypedRow DatesTableModel::typed(int r, int column, const QString &text) const {
     NumericalDate d = dateAt(r);
-    const QString where = tr("dates: %1: %2").arg(rowName(r), headerData(column, Qt::Horizontal).toString());
+    const QString where = tr("dates: %1: %2").arg(rowName(r), columnTitle(column));
     auto optionalNumber = [&](std::optional<double> &out) -> std::optional<QString> {
         if (text.isEmpty()) {
             out.reset();

@@ -21,9 +21,6 @@ class DatesTableModel : public DeskTableModel {
 
     explicit DatesTableModel(DeskProject &desk, QObject *parent = nullptr);
 
-    int columnCount(const QModelIndex &parent = {}) const override;
-    QVariant headerData(int section, Qt::Orientation orientation,
-                        int role = Qt::DisplayRole) const override;
     /// The method column offers the method words (kWordChoicesRole), the sample column the
     /// hole's samples.
     QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
@@ -31,6 +28,9 @@ class DatesTableModel : public DeskTableModel {
     const NumericalDate &dateAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
 
   protected:
+    int columnTotal() const override { return ColumnCount; }
+    QString columnTitle(int column) const override;
+    QString columnTip(int column) const override;
     int storedRowCount() const override { return static_cast<int>(rows_.size()); }
     int rowsIn(const CoreDataset &data, const std::string &hole) const override;
     void readRows(const CoreDataset &data, const std::string &hole) override;

@@ -49,6 +49,27 @@ int DeskTableModel::rowCount(const QModelIndex &parent) const {
     return parent.isValid() ? 0 : storedRowCount();
 }
 
+int DeskTableModel::columnCount(const QModelIndex &parent) const {
+    return parent.isValid() ? 0 : columnTotal();
+}
+
+QVariant DeskTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
+    if (orientation == Qt::Vertical) {
+        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+    }
+    if (section < 0 || section >= columnTotal()) {
+        return {};
+    }
+    if (role == Qt::DisplayRole) {
+        return columnTitle(section);
+    }
+    if (role == Qt::ToolTipRole) {
+        const QString tip = columnTip(section);
+        return tip.isEmpty() ? QVariant() : QVariant(tip);
+    }
+    return {};
+}
+
 QVariant DeskTableModel::data(const QModelIndex &index, int role) const {
     if (!checkIndex(index, CheckIndexOption::IndexIsValid | CheckIndexOption::ParentIsInvalid)) {
         return {};

@@ -32,6 +32,10 @@ class DeskTableModel : public QAbstractTableModel {
     DepthUnit depthUnit() const { return unit_; }
 
     int rowCount(const QModelIndex &parent = {}) const override;
+    /// columnTotal() columns; headers from columnTitle and columnTip, rows numbered from 1.
+    int columnCount(const QModelIndex &parent = {}) const final;
+    QVariant headerData(int section, Qt::Orientation orientation,
+                        int role = Qt::DisplayRole) const final;
     QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
     bool setData(const QModelIndex &index, const QVariant &value, int role = Qt::EditRole) override;
     Qt::ItemFlags flags(const QModelIndex &index) const override;
@@ -59,6 +63,11 @@ class DeskTableModel : public QAbstractTableModel {
     void refresh();
 
     virtual int storedRowCount() const = 0;
+    virtual int columnTotal() const = 0;
+    /// A column's header, with the depth unit where it holds a depth ("Top (ft)").
+    virtual QString columnTitle(int column) const = 0;
+    /// A column's header tooltip: what to type, or which stored field it is.
+    virtual QString columnTip(int column) const = 0;
     /// How many rows `hole` has in `data` (to tell an update from an added or removed row).
     virtual int rowsIn(const CoreDataset &data, const std::string &hole) const = 0;
     /// Collects the rows of `hole` from the dataset.

@@ -17,37 +17,25 @@ QString word(std::string_view w) { return QString::fromUtf8(w.data(), static_cas
 
 EventsTableModel::EventsTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
 
-int EventsTableModel::columnCount(const QModelIndex &parent) const {
-    return parent.isValid() ? 0 : ColumnCount;
+QString EventsTableModel::columnTitle(int column) const {
+    switch (column) {
+    case EventId: return tr("Event");
+    case Taxon: return tr("Taxon");
+    case Kind: return tr("Base / top");
+    case Age: return tr("Age (Ma)");
+    case AgeSd: return tr("Age sd (Ma)");
+    case Source: return tr("Source");
+    default: return {};
+    }
 }
 
-QVariant EventsTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
-    if (orientation == Qt::Vertical) {
-        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+QString EventsTableModel::columnTip(int column) const {
+    switch (column) {
+    case EventId: return tr("Unique id; zones name their bounding events by it");
+    case Kind: return tr("base: the lowest occurrence of the taxon; top: the highest");
+    case AgeSd: return tr("One standard deviation, greater than 0");
+    default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
     }
-    if (section < 0 || section >= ColumnCount) {
-        return {};
-    }
-    if (role == Qt::DisplayRole) {
-        switch (section) {
-        case EventId: return tr("Event");
-        case Taxon: return tr("Taxon");
-        case Kind: return tr("Base / top");
-        case Age: return tr("Age (Ma)");
-        case AgeSd: return tr("Age sd (Ma)");
-        case Source: return tr("Source");
-        default: return {};
-        }
-    }
-    if (role == Qt::ToolTipRole) {
-        switch (section) {
-        case EventId: return tr("Unique id; zones name their bounding events by it");
-        case Kind: return tr("base: the lowest occurrence of the taxon; top: the highest");
-        case AgeSd: return tr("One standard deviation, greater than 0");
-        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
-        }
-    }
-    return {};
 }
 
 QVariant EventsTableModel::data(const QModelIndex &index, int role) const {
@@ -96,7 +84,7 @@ DeskTableModel::TypedRow EventsTableModel::typed(int r, int column, const QStrin
     TimeScaleEvent e = eventAt(r);
     const QString where = tr("events: event '%1': %2")
                               .arg(QString::fromStdString(e.event),
-                                   headerData(column, Qt::Horizontal).toString());
+                                   columnTitle(column));
     switch (column) {
     case EventId: e.event = text.toStdString(); break;
     case Taxon: e.taxon = text.toStdString(); break;

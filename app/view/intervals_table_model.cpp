@@ -48,54 +48,41 @@ std::optional<TextureSuggestion> suggestionFor(const LithInterval &v) {
 IntervalsTableModel::IntervalsTableModel(DeskProject &desk, QObject *parent)
     : DeskTableModel(desk, parent) {}
 
-int IntervalsTableModel::columnCount(const QModelIndex &parent) const {
-    return parent.isValid() ? 0 : ColumnCount;
+QString IntervalsTableModel::columnTitle(int column) const {
+    const QString unit = unitSymbol(depthUnit());
+    switch (column) {
+    case Top: return tr("Top (%1)").arg(unit);
+    case Base: return tr("Base (%1)").arg(unit);
+    case Rock: return tr("Rock");
+    case MudSupported: return tr("Mud-supported");
+    case Grains: return tr("Grains (%)");
+    case Coarse: return tr("Over 2 mm (%)");
+    case Binding: return tr("Binding");
+    case Suggested: return tr("Texture from attributes");
+    case Texture: return tr("Texture");
+    case Surface: return tr("Base surface");
+    case PaleodepthMin: return tr("Paleodepth min (%1)").arg(unit);
+    case PaleodepthMax: return tr("Paleodepth max (%1)").arg(unit);
+    case Density: return tr("Dry density (g/cm³)");
+    case Porosity: return tr("Porosity (%)");
+    case Carbonate: return tr("CaCO₃ (%)");
+    case Notes: return tr("Notes");
+    default: return {};
+    }
 }
 
-QVariant IntervalsTableModel::headerData(int section, Qt::Orientation orientation,
-                                         int role) const {
-    if (orientation == Qt::Vertical) {
-        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+QString IntervalsTableModel::columnTip(int column) const {
+    switch (column) {
+    case Rock: return tr("One of: %1").arg(word(allowedWords<atollog::Rock>()));
+    case MudSupported: return tr("yes, no, or empty when not judged");
+    case Binding: return tr("One of: %1").arg(word(allowedWords<atollog::Binding>()));
+    case Suggested:
+        return tr("Computed from mud support, grains, coarse share and binding (Dunham 1962, "
+                  "Embry & Klovan 1971); not stored");
+    case Texture: return tr("One of: %1").arg(word(allowedWords<atollog::Texture>()));
+    case Surface: return tr("One of: %1").arg(word(allowedWords<atollog::Surface>()));
+    default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
     }
-    if (section < 0 || section >= ColumnCount) {
-        return {};
-    }
-    const QString unit = unitSymbol(depthUnit());
-    if (role == Qt::DisplayRole) {
-        switch (section) {
-        case Top: return tr("Top (%1)").arg(unit);
-        case Base: return tr("Base (%1)").arg(unit);
-        case Rock: return tr("Rock");
-        case MudSupported: return tr("Mud-supported");
-        case Grains: return tr("Grains (%)");
-        case Coarse: return tr("Over 2 mm (%)");
-        case Binding: return tr("Binding");
-        case Suggested: return tr("Texture from attributes");
-        case Texture: return tr("Texture");
-        case Surface: return tr("Base surface");
-        case PaleodepthMin: return tr("Paleodepth min (%1)").arg(unit);
-        case PaleodepthMax: return tr("Paleodepth max (%1)").arg(unit);
-        case Density: return tr("Dry density (g/cm³)");
-        case Porosity: return tr("Porosity (%)");
-        case Carbonate: return tr("CaCO₃ (%)");
-        case Notes: return tr("Notes");
-        default: return {};
-        }
-    }
-    if (role == Qt::ToolTipRole) {
-        switch (section) {
-        case Rock: return tr("One of: %1").arg(word(allowedWords<atollog::Rock>()));
-        case MudSupported: return tr("yes, no, or empty when not judged");
-        case Binding: return tr("One of: %1").arg(word(allowedWords<atollog::Binding>()));
-        case Suggested:
-            return tr("Computed from mud support, grains, coarse share and binding (Dunham 1962, "
-                      "Embry & Klovan 1971); not stored");
-        case Texture: return tr("One of: %1").arg(word(allowedWords<atollog::Texture>()));
-        case Surface: return tr("One of: %1").arg(word(allowedWords<atollog::Surface>()));
-        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
-        }
-    }
-    return {};
 }
 
 int IntervalsTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
@@ -180,7 +167,7 @@ QString IntervalsTableModel::cellToolTip(int r, int column) const {
 
 DeskTableModel::TypedRow IntervalsTableModel::typed(int r, int column, const QString &text) const {
     LithInterval v = intervalAt(r);
-    const QString field = headerData(column, Qt::Horizontal).toString();
+    const QString field = columnTitle(column);
     const QString where = tr("intervals: interval %1-%2 m of hole '%3': %4")
                               .arg(word(numberText(v.top_m)), word(numberText(v.base_m)),
                                    QString::fromStdString(v.hole), field);

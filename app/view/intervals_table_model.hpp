@@ -21,9 +21,6 @@ class IntervalsTableModel : public DeskTableModel {
 
     explicit IntervalsTableModel(DeskProject &desk, QObject *parent = nullptr);
 
-    int columnCount(const QModelIndex &parent = {}) const override;
-    QVariant headerData(int section, Qt::Orientation orientation,
-                        int role = Qt::DisplayRole) const override;
 
     const LithInterval &intervalAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
 
@@ -36,6 +33,9 @@ class IntervalsTableModel : public DeskTableModel {
     QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
 
   protected:
+    int columnTotal() const override { return ColumnCount; }
+    QString columnTitle(int column) const override;
+    QString columnTip(int column) const override;
     int storedRowCount() const override { return static_cast<int>(rows_.size()); }
     int rowsIn(const CoreDataset &data, const std::string &hole) const override;
     void readRows(const CoreDataset &data, const std::string &hole) override;

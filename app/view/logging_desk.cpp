@@ -4,6 +4,7 @@
 #include "view/desk_project.hpp"
 #include "view/desk_table_view.hpp"
 #include "view/events_table_model.hpp"
+#include "view/holes_table_model.hpp"
 #include "view/intervals_table_model.hpp"
 #include "view/next_interval.hpp"
 #include "view/occurrence_cell.hpp"
@@ -13,7 +14,10 @@
 #include "view/word_choice_delegate.hpp"
 #include "view/zones_table_model.hpp"
 
+#include <algorithm>
+
 #include <QAction>
+
 #include <QComboBox>
 #include <QHBoxLayout>
 #include <QHeaderView>
@@ -66,6 +70,7 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
     dates_ = new DatesTableModel(*desk_, this);
     events_ = new EventsTableModel(*desk_, this);
     zones_ = new ZonesTableModel(*desk_, this);
+    holes_ = new HolesTableModel(*desk_, this);
 
     hole_ = new QComboBox(this);
     hole_->setSizeAdjustPolicy(QComboBox::AdjustToContents);
@@ -139,8 +144,11 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
     zones_view_ = new DeskTableView(this);
     zones_view_->setModel(zones_);
     zones_view_->setItemDelegate(new WordChoiceDelegate(zones_view_));
+    holes_view_ = new DeskTableView(this);
+    holes_view_->setModel(holes_);
+    holes_view_->setItemDelegate(new WordChoiceDelegate(holes_view_));
     for (DeskTableView *view : {runs_view_, intervals_view_, samples_view_, occurrences_view_,
-                                dates_view_, events_view_, zones_view_}) {
+                                dates_view_, events_view_, zones_view_, holes_view_}) {
         view->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
         view->horizontalHeader()->setStretchLastSection(view != occurrences_view_);
         // A docked table may be squeezed to two rows by the panel; four is the least to log with.
@@ -150,7 +158,7 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
     }
     runs_view_->addActions({add_run_, remove_run_});
     for (DeskTableView *view : {intervals_view_, samples_view_, dates_view_, events_view_,
-                                zones_view_}) {
+                                zones_view_, holes_view_}) {
         view->addActions({add_row_, remove_row_});
     }
     occurrences_view_->addAction(add_taxon_);
@@ -165,6 +173,7 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
     tabs_->addTab(dates_view_, tr("Dates"));
     tabs_->addTab(events_view_, tr("Events"));
     tabs_->addTab(zones_view_, tr("Zones"));
+    tabs_->addTab(holes_view_, tr("Holes"));
     tabs_->setTabToolTip(0, tr("Lithology intervals of the chosen hole"));
     tabs_->setTabToolTip(2, tr("Which taxa each sample of the chosen hole holds, how many, "
                                "and whether in place"));
@@ -172,6 +181,8 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
     tabs_->setTabToolTip(4, tr("Time-scale events (datums) of the whole project, not only of "
                                "the chosen hole"));
     tabs_->setTabToolTip(5, tr("Biozones of the whole project, bounded by events"));
+    tabs_->setTabToolTip(6, tr("The project's holes: site, kind, position, collar height and "
+                               "place along the chain"));
     split->addWidget(tabs_);
     split->setStretchFactor(0, 2);
     split->setStretchFactor(1, 5);
@@ -201,6 +212,7 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
         dates_->setHole(hole);
         events_->setHole(hole);
         zones_->setHole(hole);
+        holes_->setHole(hole);
     });
     connect(unit_, &QComboBox::currentIndexChanged, this, [this] {
         const auto unit = static_cast<DepthUnit>(unit_->currentData().toInt());
@@ -208,6 +220,7 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
         intervals_->setDepthUnit(unit);
         samples_->setDepthUnit(unit);
         dates_->setDepthUnit(unit);
+        holes_->setDepthUnit(unit); // collar heights
     });
     connect(add_interval_, &QAction::triggered, this, &LoggingDesk::addInterval);
     connect(add_run_, &QAction::triggered, this, &LoggingDesk::addRun);
@@ -219,6 +232,7 @@ LoggingDesk::LoggingDesk(QWidget *parent) : QWidget(parent) {
     updateRowActions();
     connect(desk_, &DeskProject::messageChanged, this, &LoggingDesk::showMessage);
     connect(desk_, &DeskProject::written, this, &LoggingDesk::projectWritten);
+    connect(desk_, &DeskProject::changed, this, &LoggingDesk::followHoles);
     showMessage({}, false);
 }
 
@@ -229,16 +243,28 @@ bool LoggingDesk::openProject(const QString &path) {
     return opened;
 }
 
+namespace {
+
+QString holeLabel(const Hole &h) {
+    const QString id = QString::fromStdString(h.hole);
+    return h.site.empty() ? id : LoggingDesk::tr("%1 (%2)").arg(id, QString::fromStdString(h.site));
+}
+
+} // namespace
+
 void LoggingDesk::fillHoles() {
     const QString current = hole_->currentData().toString();
+    const int current_at = hole_->currentIndex();
     QSignalBlocker quiet(hole_);
     hole_->clear();
     for (const Hole &h : desk_->data().holes) {
-        const QString id = QString::fromStdString(h.hole);
-        hole_->addItem(h.site.empty() ? id : tr("%1 (%2)").arg(id, QString::fromStdString(h.site)),
-                       id);
+        hole_->addItem(holeLabel(h), QString::fromStdString(h.hole));
     }
-    hole_->setCurrentIndex(std::max(0, hole_->findData(current)));
+    int at = hole_->findData(current);
+    if (at < 0 && hole_->count() > 0) { // renamed or removed: the row in its place
+        at = std::min(std::max(current_at, 0), hole_->count() - 1);
+    }
+    hole_->setCurrentIndex(std::max(0, at));
     const std::string hole = hole_->currentData().toString().toStdString();
     runs_->setHole(hole);
     intervals_->setHole(hole);
@@ -247,7 +273,21 @@ void LoggingDesk::fillHoles() {
     dates_->setHole(hole);
     events_->setHole(hole);
     zones_->setHole(hole);
+    holes_->setHole(hole);
     fitRunsWidth();
+}
+
+void LoggingDesk::followHoles() {
+    const std::vector<Hole> &holes = desk_->data().holes;
+    bool same = static_cast<int>(holes.size()) == hole_->count();
+    for (int i = 0; same && i < hole_->count(); ++i) {
+        const Hole &h = holes[static_cast<std::size_t>(i)];
+        same = hole_->itemData(i).toString() == QString::fromStdString(h.hole) &&
+               hole_->itemText(i) == holeLabel(h);
+    }
+    if (!same) {
+        fillHoles();
+    }
 }
 
 void LoggingDesk::fitRunsWidth() {
@@ -313,6 +353,7 @@ DeskTableModel *LoggingDesk::currentTabModel() const {
     if (tab == dates_view_) return dates_;
     if (tab == events_view_) return events_;
     if (tab == zones_view_) return zones_;
+    if (tab == holes_view_) return holes_;
     return nullptr; // the occurrence grid: cells are added and cleared by typing
 }
 
@@ -350,6 +391,7 @@ void LoggingDesk::updateRowActions() {
                          : tab == samples_view_ ? tr("sample")
                          : tab == dates_view_   ? tr("date")
                          : tab == events_view_  ? tr("event")
+                         : tab == holes_view_   ? tr("hole")
                                                 : tr("zone");
     add_row_->setText(tr("Add %1").arg(rows));
     remove_row_->setText(tr("Remove %1").arg(rows));

@@ -25,6 +25,7 @@ class DeskProject;
 class DeskTableModel;
 class DeskTableView;
 class EventsTableModel;
+class HolesTableModel;
 class IntervalsTableModel;
 class OccurrenceGridModel;
 class RunsTableModel;
@@ -55,10 +56,12 @@ class LoggingDesk : public QWidget {
     DatesTableModel *datesModel() const { return dates_; }
     EventsTableModel *eventsModel() const { return events_; }
     ZonesTableModel *zonesModel() const { return zones_; }
+    HolesTableModel *holesModel() const { return holes_; }
     DeskTableView *occurrencesView() const { return occurrences_view_; }
     DeskTableView *datesView() const { return dates_view_; }
     DeskTableView *eventsView() const { return events_view_; }
     DeskTableView *zonesView() const { return zones_view_; }
+    DeskTableView *holesView() const { return holes_view_; }
     QTabWidget *tabs() const { return tabs_; }
     QAction *addRunAction() const { return add_run_; }
     QAction *removeRunAction() const { return remove_run_; }
@@ -86,6 +89,9 @@ class LoggingDesk : public QWidget {
 
   private:
     void fillHoles();
+    /// Refills the hole chooser when an edit, undo or redo added, renamed or removed a hole
+    /// (or changed a site, which the chooser shows); a renamed hole stays chosen.
+    void followHoles();
     /// Gives the runs table the width of its columns (it is narrow; the intervals take the rest).
     void fitRunsWidth();
     void addInterval();
@@ -112,6 +118,7 @@ class LoggingDesk : public QWidget {
     DatesTableModel *dates_ = nullptr;
     EventsTableModel *events_ = nullptr;
     ZonesTableModel *zones_ = nullptr;
+    HolesTableModel *holes_ = nullptr;
     DeskTableView *runs_view_ = nullptr;
     DeskTableView *intervals_view_ = nullptr;
     DeskTableView *samples_view_ = nullptr;
@@ -119,6 +126,7 @@ class LoggingDesk : public QWidget {
     DeskTableView *dates_view_ = nullptr;
     DeskTableView *events_view_ = nullptr;
     DeskTableView *zones_view_ = nullptr;
+    DeskTableView *holes_view_ = nullptr;
     QTabWidget *tabs_ = nullptr; ///< intervals, samples, occurrences, dates, events, zones
     QComboBox *hole_ = nullptr;
     QComboBox *unit_ = nullptr;

@@ -17,37 +17,25 @@ const char *const kFieldNames[] = {"run", "top_m", "base_m", "recovered_m", "cor
 
 RunsTableModel::RunsTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
 
-int RunsTableModel::columnCount(const QModelIndex &parent) const {
-    return parent.isValid() ? 0 : ColumnCount;
+QString RunsTableModel::columnTitle(int column) const {
+    const QString unit = unitSymbol(depthUnit());
+    switch (column) {
+    case Run: return tr("Run");
+    case Top: return tr("Top (%1)").arg(unit);
+    case Base: return tr("Base (%1)").arg(unit);
+    case Recovered: return tr("Recovered (%1)").arg(unit);
+    case Cored: return tr("Cored (%1)").arg(unit);
+    case Recovery: return tr("Recovery (%)");
+    default: return {};
+    }
 }
 
-QVariant RunsTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
-    if (orientation == Qt::Vertical) {
-        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+QString RunsTableModel::columnTip(int column) const {
+    switch (column) {
+    case Cored: return tr("Base minus top; computed");
+    case Recovery: return tr("Recovered over cored length; computed, updated as you log");
+    default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
     }
-    if (section < 0 || section >= ColumnCount) {
-        return {};
-    }
-    const QString unit = unitSymbol(depthUnit());
-    if (role == Qt::DisplayRole) {
-        switch (section) {
-        case Run: return tr("Run");
-        case Top: return tr("Top (%1)").arg(unit);
-        case Base: return tr("Base (%1)").arg(unit);
-        case Recovered: return tr("Recovered (%1)").arg(unit);
-        case Cored: return tr("Cored (%1)").arg(unit);
-        case Recovery: return tr("Recovery (%)");
-        default: return {};
-        }
-    }
-    if (role == Qt::ToolTipRole) {
-        switch (section) {
-        case Cored: return tr("Base minus top; computed");
-        case Recovery: return tr("Recovered over cored length; computed, updated as you log");
-        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
-        }
-    }
-    return {};
 }
 
 int RunsTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
@@ -92,7 +80,7 @@ DeskTableModel::TypedRow RunsTableModel::typed(int r, int column, const QString 
         return db::EditableRow{run};
     }
     const std::optional<double> number = readNumber(text);
-    const QString field = headerData(column, Qt::Horizontal).toString();
+    const QString field = columnTitle(column);
     if (!number) {
         return tr("runs: run '%1': %2: '%3' is not a number; type a length in %4, e.g. 1.25")
             .arg(QString::fromStdString(run.run), field, text, unitSymbol(depthUnit()));

@@ -16,35 +16,23 @@ const char *const kFieldNames[] = {"sample", "top_m", "base_m", "kind"};
 SamplesTableModel::SamplesTableModel(DeskProject &desk, QObject *parent)
     : DeskTableModel(desk, parent) {}
 
-int SamplesTableModel::columnCount(const QModelIndex &parent) const {
-    return parent.isValid() ? 0 : ColumnCount;
+QString SamplesTableModel::columnTitle(int column) const {
+    const QString unit = unitSymbol(depthUnit());
+    switch (column) {
+    case SampleId: return tr("Sample");
+    case Top: return tr("Top (%1)").arg(unit);
+    case Base: return tr("Base (%1)").arg(unit);
+    case Kind: return tr("Kind");
+    default: return {};
+    }
 }
 
-QVariant SamplesTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
-    if (orientation == Qt::Vertical) {
-        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+QString SamplesTableModel::columnTip(int column) const {
+    switch (column) {
+    case Base: return tr("Equal to the top for a point sample");
+    case Kind: return tr("A free word: core, cuttings, barren, ...");
+    default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
     }
-    if (section < 0 || section >= ColumnCount) {
-        return {};
-    }
-    const QString unit = unitSymbol(depthUnit());
-    if (role == Qt::DisplayRole) {
-        switch (section) {
-        case SampleId: return tr("Sample");
-        case Top: return tr("Top (%1)").arg(unit);
-        case Base: return tr("Base (%1)").arg(unit);
-        case Kind: return tr("Kind");
-        default: return {};
-        }
-    }
-    if (role == Qt::ToolTipRole) {
-        switch (section) {
-        case Base: return tr("Equal to the top for a point sample");
-        case Kind: return tr("A free word: core, cuttings, barren, ...");
-        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
-        }
-    }
-    return {};
 }
 
 int SamplesTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
@@ -82,7 +70,7 @@ DeskTableModel::TypedRow SamplesTableModel::typed(int r, int column, const QStri
     const std::optional<double> number = readNumber(text);
     if (!number) {
         return tr("samples: sample '%1': %2: '%3' is not a number; type a depth in %4, e.g. 12.5")
-            .arg(QString::fromStdString(s.sample), headerData(column, Qt::Horizontal).toString(),
+            .arg(QString::fromStdString(s.sample), columnTitle(column),
                  text, unitSymbol(depthUnit()));
     }
     (column == Top ? s.top_m : s.base_m) = depthInMetres(*number, depthUnit());

@@ -18,35 +18,23 @@ QString optionalText(const std::optional<std::string> &v) {
 
 ZonesTableModel::ZonesTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
 
-int ZonesTableModel::columnCount(const QModelIndex &parent) const {
-    return parent.isValid() ? 0 : ColumnCount;
+QString ZonesTableModel::columnTitle(int column) const {
+    switch (column) {
+    case Scheme: return tr("Scheme");
+    case ZoneName: return tr("Zone");
+    case BaseEvent: return tr("Base event");
+    case TopEvent: return tr("Top event");
+    default: return {};
+    }
 }
 
-QVariant ZonesTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
-    if (orientation == Qt::Vertical) {
-        return role == Qt::DisplayRole ? QVariant(section + 1) : QVariant();
+QString ZonesTableModel::columnTip(int column) const {
+    switch (column) {
+    case BaseEvent:
+    case TopEvent:
+        return tr("An event id of the Events tab; empty leaves this end of the zone open");
+    default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
     }
-    if (section < 0 || section >= ColumnCount) {
-        return {};
-    }
-    if (role == Qt::DisplayRole) {
-        switch (section) {
-        case Scheme: return tr("Scheme");
-        case ZoneName: return tr("Zone");
-        case BaseEvent: return tr("Base event");
-        case TopEvent: return tr("Top event");
-        default: return {};
-        }
-    }
-    if (role == Qt::ToolTipRole) {
-        switch (section) {
-        case BaseEvent:
-        case TopEvent:
-            return tr("An event id of the Events tab; empty leaves this end of the zone open");
-        default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[section]));
-        }
-    }
-    return {};
 }
 
 QVariant ZonesTableModel::data(const QModelIndex &index, int role) const {

@@ -6,7 +6,10 @@
 
 #include "atollog/db/project_store.hpp"
 
+#include <SQLiteCpp/Database.h>
+
 #include <QAbstractItemModelTester>
+#include <QUndoStack>
 #include <QStringList>
 
 #include <catch2/catch.hpp>
@@ -60,6 +63,27 @@ inline std::string fileBytes(const std::filesystem::path &file) {
     std::ifstream in(file, std::ios::binary);
     return {std::istreambuf_iterator<char>(in), std::istreambuf_iterator<char>()};
 }
+
+/// PRAGMA integrity_check of the file on a read-only connection: "ok" when intact.
+inline std::string integrity(const std::filesystem::path &file) {
+    SQLite::Database db(file.string(), SQLite::OPEN_READONLY);
+    return db.execAndGet("PRAGMA integrity_check").getString();
+}
+
+/// Checks that a refusal wrote nothing: main and -wal bytes, the stack, integrity.
+struct Untouched {
+    const DemoCopy &copy;
+    QUndoStack &stack;
+    std::string main = fileBytes(copy.path());
+    std::string wal = fileBytes(copy.path().string() + "-wal");
+    int count = stack.count();
+    void check() const {
+        CHECK(fileBytes(copy.path()) == main);
+        CHECK(fileBytes(copy.path().string() + "-wal") == wal);
+        CHECK(stack.count() == count);
+        CHECK(integrity(copy.path()) == "ok");
+    }
+};
 
 /// Collects QAbstractItemModelTester's reports (category qt.modeltest) while alive.
 class ModelTesterLog {

@@ -59,11 +59,6 @@ std::vector<LithInterval> intervalsOf(const CoreDataset &data, const std::string
     return out;
 }
 
-std::string integrity(const std::filesystem::path &file) {
-    SQLite::Database db(file.string(), SQLite::OPEN_READONLY);
-    return db.execAndGet("PRAGMA integrity_check").getString();
-}
-
 } // namespace
 
 TEST_CASE("both desk tables pass the model tester while logging", "[view][desk]") {

@@ -65,11 +65,6 @@ bool type(QAbstractItemModel &m, int r, int c, const QString &text) {
     return m.setData(m.index(r, c), text);
 }
 
-std::string integrity(const std::filesystem::path &file) {
-    SQLite::Database db(file.string(), SQLite::OPEN_READONLY);
-    return db.execAndGet("PRAGMA integrity_check").getString();
-}
-
 std::vector<std::string> runIds(const CoreDataset &data, const std::string &hole) {
     std::vector<std::string> ids;
     for (const CoreRun &r : data.runs) {
@@ -86,21 +81,6 @@ int dateRow(const DatesTableModel &m, DateMethod method) {
     FAIL("no date of that method");
     return -1;
 }
-
-/// Checks that a refusal wrote nothing: main and -wal bytes, the stack, integrity.
-struct Untouched {
-    const DemoCopy &copy;
-    QUndoStack &stack;
-    std::string main = fileBytes(copy.path());
-    std::string wal = fileBytes(copy.path().string() + "-wal");
-    int count = stack.count();
-    void check() const {
-        CHECK(fileBytes(copy.path()) == main);
-        CHECK(fileBytes(copy.path().string() + "-wal") == wal);
-        CHECK(stack.count() == count);
-        CHECK(integrity(copy.path()) == "ok");
-    }
-};
 
 } // namespace
 
@@ -402,7 +382,7 @@ TEST_CASE("the desk's row actions follow the current tab", "[view][desk][tables]
     LoggingDesk desk;
     REQUIRE(desk.openProject(copy.qpath()));
     QTabWidget *tabs = desk.tabs();
-    REQUIRE(tabs->count() == 6);
+    REQUIRE(tabs->count() == 7);
     tabs->setCurrentWidget(desk.samplesView());
     CHECK(desk.addRowAction()->text() == QLatin1String("Add sample"));
     CHECK(desk.removeRowAction()->text() == QLatin1String("Remove sample"));
