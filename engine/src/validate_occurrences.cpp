@@ -30,7 +30,11 @@ void validateOccurrences(const CoreDataset &data, IssueList &out) {
             continue;
         if (const auto *count = std::get_if<std::int64_t>(&*o.abundance); count && *count < 0)
             out.error(Table::Occurrences, i, "abundance", std::to_string(*count),
-                      "taxon " + quoted(o.taxon) + " in sample " + quoted(o.sample) + ": count " +
+                      // Named as the row edits name the row (status included: one taxon may
+                      // be logged in place and reworked in one sample), so an edit's refusal
+                      // gives the name once.
+                      "taxon " + quoted(o.taxon) + " (" + std::string(toString(o.status)) +
+                          ") in sample " + quoted(o.sample) + ": count " +
                           std::to_string(*count) + " is negative",
                       "give a whole count of 0 or more, or an abundance word");
     }

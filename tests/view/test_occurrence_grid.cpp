@@ -79,11 +79,6 @@ std::string emptyColumn(const Grid &g, const std::string &sample) {
     return {};
 }
 
-std::string integrity(const std::filesystem::path &file) {
-    SQLite::Database db(file.string(), SQLite::OPEN_READONLY);
-    return db.execAndGet("PRAGMA integrity_check").getString();
-}
-
 } // namespace
 
 TEST_CASE("occurrence cell text is read back to what was written", "[view][desk][grid]") {
@@ -264,6 +259,7 @@ TEST_CASE("refused cells leave the file as it was and say why", "[view][desk][gr
         CHECK(message.contains(QLatin1String("abundance")));
         CHECK(message.contains(QLatin1String("is negative")));
         CHECK(message.contains(QLatin1String("give a whole count of 0 or more")));
+        CHECK(message.count(QLatin1String("in sample")) == 1); // the row named once
         CHECK(g.project.lastWasRefusal());
         CHECK(g.cell(sample, taxon).data(Qt::ToolTipRole).toString() == message);
     }
