@@ -1,10 +1,14 @@
-// The canvas driven through QTest: zoom, pan, fit, tooltip, selection, column drag, culling.
+// The canvas driven through QTest: zoom, pan, fit, tooltip, selection, column drag, culling,
+// painting at a high-DPI device pixel ratio.
 #include "canvas_fixture.hpp"
 
 #include <QApplication>
 #include <QHelpEvent>
 #include <QToolTip>
 #include <QWheelEvent>
+
+#include <algorithm>
+#include <cstdlib>
 
 using namespace atollog;
 using namespace atollog::view;
@@ -169,4 +173,61 @@ TEST_CASE("painting skips what is off screen", "[view][canvas]") {
     const auto zoomed = s.canvas.lastPaintStats();
     CHECK(zoomed.culled > 0);
     CHECK(zoomed.painted < whole.painted);
+}
+
+namespace {
+
+/// Mean absolute difference per channel (0-255) of two images of one size.
+double meanDifference(const QImage &a, const QImage &b) {
+    double sum = 0;
+    for (int y = 0; y < a.height(); ++y) {
+        for (int x = 0; x < a.width(); ++x) {
+            const QRgb p = a.pixel(x, y), q = b.pixel(x, y);
+            sum += std::abs(qRed(p) - qRed(q)) + std::abs(qGreen(p) - qGreen(q)) +
+                   std::abs(qBlue(p) - qBlue(q));
+        }
+    }
+    return sum / (3.0 * a.width() * a.height());
+}
+
+/// Share of pixels whose largest channel difference exceeds `threshold`.
+double shareDiffering(const QImage &a, const QImage &b, int threshold) {
+    long long n = 0;
+    for (int y = 0; y < a.height(); ++y) {
+        for (int x = 0; x < a.width(); ++x) {
+            const QRgb p = a.pixel(x, y), q = b.pixel(x, y);
+            const int d = std::max({std::abs(qRed(p) - qRed(q)), std::abs(qGreen(p) - qGreen(q)),
+                                    std::abs(qBlue(p) - qBlue(q))});
+            n += d > threshold ? 1 : 0;
+        }
+    }
+    return static_cast<double>(n) / (static_cast<double>(a.width()) * a.height());
+}
+
+} // namespace
+
+TEST_CASE("on a high-DPI screen the canvas draws at the screen's resolution", "[view][canvas]") {
+    // A screen at a device pixel ratio of 2 gets a paint device twice as dense (Qt's high-DPI
+    // scaling); painting into such a pixmap is what the screen's backing store gets.
+    ShownCanvas s;
+    const QSize logical = s.canvas.size();
+    const auto render = [&](qreal dpr) {
+        QPixmap pixmap(logical * dpr);
+        pixmap.setDevicePixelRatio(dpr);
+        pixmap.fill(Qt::white);
+        s.canvas.render(&pixmap);
+        return pixmap.toImage().convertToFormat(QImage::Format_RGB32);
+    };
+    const QImage one = render(1.0), two = render(2.0);
+    REQUIRE(two.size() == logical * 2);
+    // The same drawing: the dense picture scaled down matches the plain one...
+    const QImage down = two.scaled(logical, Qt::IgnoreAspectRatio, Qt::SmoothTransformation);
+    const double mean = meanDifference(down, one);
+    // ...and it is not the plain picture stretched (what a canvas painting into a 1x buffer
+    // would show): its edges and text are drawn anew at each device pixel.
+    const QImage stretched = one.scaled(logical * 2, Qt::IgnoreAspectRatio, Qt::FastTransformation);
+    const double sharper = shareDiffering(two, stretched, 48);
+    INFO("mean difference scaled down " << mean << ", share differing from stretched " << sharper);
+    CHECK(mean < 3.0); // measured about 1 (text antialiasing)
+    CHECK(sharper > 0.005);
 }
