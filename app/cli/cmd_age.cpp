@@ -72,10 +72,13 @@ CommandRun addAgeCommand(CLI::App& app, const CommandIo& io) {
             throw std::invalid_argument("--plot draws one hole: give --hole as well");
         auto store = db::ProjectStore::open(o->project);
         const CoreDataset data = store.loadDataset();
-        const AgeModelRun run = buildAgeModels(data, o->model, o->hole, [&io](const std::string& phase) {
-            io.progress(phase);
-            return true;
-        });
+        const AgeModelRun run = buildAgeModels(
+            data, o->model, o->hole,
+            [&io](const std::string& phase) {
+                io.progress(phase);
+                return true;
+            },
+            io.steps());
         const auto& inputs = run.inputs;
         const auto& models = run.models;
         const bool csv = o->csv;

@@ -112,7 +112,7 @@ CommandRun addRatesCommand(CLI::App& app, const CommandIo& io) {
                         {"flags"}});
         for (const auto& in : gatherAgeModelInputs(data, o->model, o->hole)) {
             io.progress("age model of " + in.hole);
-            const AgeModel m = buildHoleModel(in, o->model);
+            const AgeModel m = buildHoleModel(in, o->model, {}, io.steps());
             for (const auto& r : m.rates) {
                 // Two ties at one depth (e.g. two dates of one sample) give no thickness: no rate.
                 if (r.defined_share <= 0 || !(r.base_m > r.top_m)) continue;

@@ -69,10 +69,13 @@ CommandRun addSubsidenceCommand(CLI::App& app, const CommandIo& io) {
                               {"thermal_ps77_m", A::Right}, {"thermal_gdh1_m", A::Right}, {"flags"}});
         TablePrinter rates({{"hole"}, {"points", A::Right}, {"rate_m_per_myr", A::Right},
                             {"rate_sd_m_per_myr", A::Right}, {"mswd", A::Right}, {"flags"}});
-        const auto holes = computeSubsidence(data, o->model, o->hole, [&io](const std::string& phase) {
-            io.progress(phase);
-            return true;
-        });
+        const auto holes = computeSubsidence(
+            data, o->model, o->hole,
+            [&io](const std::string& phase) {
+                io.progress(phase);
+                return true;
+            },
+            io.steps());
         for (const HoleSubsidence& h : holes) {
             for (const SampleSubsidence& s : h.samples) {
                 const SubsidenceEstimate& e = s.estimate;

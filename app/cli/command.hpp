@@ -1,6 +1,8 @@
 #pragma once
 // How a sub-command plugs into the command line: it declares its options on a CLI11 sub-app and
 // returns the function that does the work once parsing succeeded.
+#include "atollog/engine/work_progress.hpp"
+
 #include <CLI/CLI.hpp>
 
 #include <functional>
@@ -13,6 +15,10 @@ struct CommandIo {
     std::ostream& err;
     bool show_progress = false; ///< stderr is a terminal: long work reports its phases there
     void progress(const std::string& message) const;
+    /// On a terminal: a WorkProgress that shows how far the current phase is, in whole per
+    /// cent on one line rewritten in place ("atollog:   45 %"), ended at 100 %; it never stops
+    /// the work. Elsewhere: none (empty), so scripts and logs see only the phases.
+    WorkProgress steps() const;
 };
 
 /// The work of one sub-command; returns the exit code. Throws for bad input; runCli turns the

@@ -6,6 +6,7 @@
 #include "atollog/db/version.hpp"
 
 #include <filesystem>
+#include <iomanip>
 #include <iostream>
 #include <map>
 #include <unistd.h>
@@ -14,6 +15,20 @@ namespace atollog::cli {
 
 void CommandIo::progress(const std::string& message) const {
     if (show_progress) err << "atollog: " << message << '\n' << std::flush;
+}
+
+WorkProgress CommandIo::steps() const {
+    if (!show_progress) return {};
+    // Calls never overlap (the engine serialises them), so the last shown share needs no lock.
+    return [&err = err, shown = -1](std::size_t done, std::size_t total) mutable {
+        const int percent = total == 0 ? 100 : static_cast<int>(done * 100 / total);
+        if (percent != shown) {
+            shown = percent;
+            err << "\ratollog: " << std::setw(4) << percent << " %" << (done >= total ? "\n" : "")
+                << std::flush;
+        }
+        return true;
+    };
 }
 
 int runCli(int argc, const char* const* argv, std::ostream& out, std::ostream& err) {
