@@ -11,7 +11,9 @@
 #include "composite_sequence_placement.hpp"
 #include "composite_sequence_ranges.hpp"
 #include "parallel_blocks.hpp"
+#include "progress_counter.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <stdexcept>
 #include <string>
@@ -44,11 +46,23 @@ struct NoObserver {
     void operator()(const std::vector<std::size_t>&, std::size_t, std::size_t, double) const {}
 };
 
+/// Progress blocks per restart: about 64 blocks over the whole first pass, so that the bar
+/// moves in small steps also with the default 4 restarts (16 blocks of 12,500 moves each);
+/// one block per restart from 64 restarts up. Never more blocks than moves. Blocks are equal
+/// runs of moves, and a move costs the same on average wherever it falls in a run (the same
+/// proposal rule throughout; only the acceptance changes with the temperature).
+std::int64_t progressBlocksPerRestart(const SequenceSettings& s) {
+    constexpr std::int64_t kBlocksOverAllRestarts = 64;
+    const std::int64_t per = (kBlocksOverAllRestarts + s.restarts - 1) / s.restarts;
+    return std::max<std::int64_t>(1, std::min(per, s.moves_per_restart));
+}
+
 } // namespace
 
 CompositeSequence buildCompositeSequence(const CorrelationData& data,
                                          const SequenceSettings& settings,
-                                         const std::vector<std::size_t>& start_order) {
+                                         const std::vector<std::size_t>& start_order,
+                                         const WorkProgress& progress) {
     validateCorrelationData(data);
     checkSettings(settings);
     detail::OrderRules rules = detail::hardOrderRules(data);
@@ -65,10 +79,16 @@ CompositeSequence buildCompositeSequence(const CorrelationData& data,
 
     const std::size_t restarts = static_cast<std::size_t>(settings.restarts);
     auto restartSeed = [&](std::size_t r) { return streamSeed(settings.seed, r); };
+    // Progress: every restart's moves in equal blocks, first pass and near-best replay alike;
+    // a restart that needs no replay counts its replay's blocks as done once that is known.
+    const std::int64_t blocks = progressBlocksPerRestart(settings);
+    detail::ProgressCounter counter(progress, 2 * restarts * static_cast<std::size_t>(blocks));
+    auto blockDone = [&counter] { counter.advance(); };
     std::vector<detail::RestartOutcome> runs(restarts);
     detail::runBlocks(restarts, settings.threads, [&](std::size_t r, std::size_t) {
         runs[r] = detail::annealRestart(space, start, start_misfit, restartSeed(r),
-                                        settings.moves_per_restart, NoObserver{});
+                                        settings.moves_per_restart, NoObserver{}, blockDone,
+                                        blocks);
     });
 
     CompositeSequence out;
@@ -97,11 +117,14 @@ CompositeSequence buildCompositeSequence(const CorrelationData& data,
     for (std::size_t r = 0; r < restarts; ++r)
         if (runs[r].best_misfit <= threshold)
             replays.push_back(r);
+    for (std::size_t r = replays.size(); r < restarts; ++r)
+        for (std::int64_t b = 0; b < blocks; ++b)
+            counter.advance();
     std::vector<detail::NearBestRanges> ranges(replays.size(),
                                                detail::NearBestRanges(space.n, threshold));
     detail::runBlocks(replays.size(), settings.threads, [&](std::size_t i, std::size_t) {
         detail::annealRestart(space, start, start_misfit, restartSeed(replays[i]),
-                              settings.moves_per_restart, ranges[i]);
+                              settings.moves_per_restart, ranges[i], blockDone, blocks);
     });
     detail::NearBestRanges all(space.n, threshold);
     if (space.n > 0)

@@ -104,47 +104,72 @@ std::pair<double, double> annealingTemperatures(const SequenceSearchSpace& s,
                                                 const std::vector<std::size_t>& order,
                                                 std::mt19937_64& rng);
 
+/// Does nothing at the end of a block of moves (no progress wanted).
+struct NoBlockEnd {
+    void operator()() const {}
+};
+
 /// Runs `moves` proposals from `order` (which must respect the rules) with misfit `misfit`.
 /// `observe(order, first, last, misfit)` sees the start (first 0, last n - 1) and every accepted
 /// order, with the positions [first, last] whose events changed: the test hook for the
 /// incremental misfit, and the near-best ranges' feed. The same seed gives the same run.
-template <class Observer>
+/// The moves are cut into `blocks` (1 <= blocks <= moves) runs of equal length (within one
+/// move: block b ends at move moves * (b + 1) / blocks), and `block_end()` is called after each:
+/// the progress hook. It may throw to stop the run; it cannot change it, since it sees nothing.
+/// A run with fewer than two events makes no moves and calls it `blocks` times at once.
+template <class Observer, class BlockEnd = NoBlockEnd>
 RestartOutcome annealRestart(const SequenceSearchSpace& s, std::vector<std::size_t> order,
                              double misfit, std::uint64_t seed, std::int64_t moves,
-                             Observer&& observe) {
+                             Observer&& observe, BlockEnd&& block_end = BlockEnd{},
+                             std::int64_t blocks = 1) {
     RestartOutcome out;
     out.best_order = order;
     out.best_misfit = misfit;
-    if (s.n == 0)
+    auto all_blocks_end = [&] {
+        for (std::int64_t b = 0; b < blocks; ++b)
+            block_end();
+    };
+    if (s.n == 0) {
+        all_blocks_end();
         return out;
+    }
     observe(static_cast<const std::vector<std::size_t>&>(order), std::size_t{0}, s.n - 1, misfit);
-    if (s.n < 2)
+    if (s.n < 2) {
+        all_blocks_end();
         return out;
+    }
     std::mt19937_64 rng(seed);
     const auto [t0, t1] = annealingTemperatures(s, order, rng);
     out.start_temperature = t0;
     out.end_temperature = t1;
     const double cooling = std::pow(t1 / t0, 1.0 / static_cast<double>(moves));
     double t = t0;
-    for (std::int64_t k = 0; k < moves; ++k, t *= cooling) {
-        const SequenceMove m = proposeMove(s, order, rng);
-        ++out.tried;
-        if (m.to == m.from)
-            continue;
-        if (m.delta > 0) {
-            const double u = static_cast<double>(rng() >> 11) * 0x1.0p-53;
-            if (!(u < std::exp(-m.delta / t)))
+    std::int64_t k = 0;
+    for (std::int64_t b = 0; b < blocks; ++b) {
+        // The same moves, temperatures and draws in the same order as one loop over all moves:
+        // the blocks only mark where the progress hook runs.
+        const std::int64_t block_last = moves / blocks * (b + 1) + moves % blocks * (b + 1) / blocks;
+        for (; k < block_last; ++k, t *= cooling) {
+            const SequenceMove m = proposeMove(s, order, rng);
+            ++out.tried;
+            if (m.to == m.from)
                 continue;
+            if (m.delta > 0) {
+                const double u = static_cast<double>(rng() >> 11) * 0x1.0p-53;
+                if (!(u < std::exp(-m.delta / t)))
+                    continue;
+            }
+            applyMove(order, m);
+            misfit += m.delta;
+            ++out.accepted;
+            observe(static_cast<const std::vector<std::size_t>&>(order), std::min(m.from, m.to),
+                    std::max(m.from, m.to), misfit);
+            if (misfit < out.best_misfit) {
+                out.best_misfit = misfit;
+                out.best_order = order;
+            }
         }
-        applyMove(order, m);
-        misfit += m.delta;
-        ++out.accepted;
-        observe(static_cast<const std::vector<std::size_t>&>(order), std::min(m.from, m.to),
-                std::max(m.from, m.to), misfit);
-        if (misfit < out.best_misfit) {
-            out.best_misfit = misfit;
-            out.best_order = order;
-        }
+        block_end();
     }
     return out;
 }

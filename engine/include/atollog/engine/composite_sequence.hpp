@@ -22,6 +22,7 @@
 // pairs more than the placement would. The extensions reported for the best order are computed
 // exactly by placement (see HoleExtension).
 #include "atollog/engine/correlation_data.hpp"
+#include "atollog/engine/work_progress.hpp"
 
 #include <cstddef>
 #include <cstdint>
@@ -101,8 +102,15 @@ double sequenceMisfit(const CorrelationData& data, const std::vector<std::size_t
 /// (1 MB), shared by all restarts. Throws std::invalid_argument naming the setting or entry at
 /// fault (restarts, moves_per_restart, threads < 1; a negative or non-finite tolerance; a taxon
 /// with two bases or two tops; a start_order that is no permutation of the events).
+/// `progress` hears of each block of annealing moves: every restart's moves are cut into equal
+/// blocks (about 64 over all restarts, at least one per restart), counted for the first pass
+/// and again for the near-best replay (2 x restarts x blocks in all; a restart that needs no
+/// replay has its replay blocks counted done as soon as that is known). It never changes the
+/// result; when it returns false the search stops at the next block boundary of any thread and
+/// throws WorkStopped.
 CompositeSequence buildCompositeSequence(const CorrelationData& data,
                                          const SequenceSettings& settings,
-                                         const std::vector<std::size_t>& start_order = {});
+                                         const std::vector<std::size_t>& start_order = {},
+                                         const WorkProgress& progress = {});
 
 } // namespace atollog
