@@ -18,6 +18,9 @@ class TablePrinter {
     explicit TablePrinter(std::vector<Column> columns);
     void addRow(std::vector<std::string> cells);
     std::size_t rowCount() const { return rows_.size(); }
+    /// The columns and the cells as added (for a view that shows the same table).
+    const std::vector<Column>& columns() const { return columns_; }
+    const std::vector<std::vector<std::string>>& rows() const { return rows_; }
     void printText(std::ostream& out) const;
     void printCsv(std::ostream& out) const;
     void print(std::ostream& out, bool csv) const { csv ? printCsv(out) : printText(out); }
