@@ -3,11 +3,11 @@
 #include "cli/figure_file.hpp"
 #include "view/exception_text.hpp"
 #include "view/figure_job.hpp"
+#include "view/job_controls.hpp"
 #include "view/panel_canvas.hpp"
 
 #include <QCheckBox>
 #include <QComboBox>
-#include <QElapsedTimer>
 #include <QFileDialog>
 #include <QFormLayout>
 #include <QHBoxLayout>
@@ -59,30 +59,14 @@ FigureWindow::FigureWindow(QWidget *parent)
     form->addRow(tr("Age-model draws"), draws_);
     form->addRow(tr("Seed"), seed_);
 
-    draw_button_ = new QPushButton(tr("&Draw"), this);
-    draw_button_->setDefault(true);
-    stop_button_ = new QPushButton(tr("&Stop"), this);
-    stop_button_->setEnabled(false);
+    controls_ = new JobControls(tr("&Draw"), this);
+    connect(controls_, &JobControls::jobEnded, this, &FigureWindow::jobEnded);
     export_button_ = new QPushButton(tr("&Export..."), this);
     export_button_->setEnabled(false);
-    auto *buttons = new QHBoxLayout;
-    buttons->addWidget(draw_button_);
-    buttons->addWidget(stop_button_);
-    buttons->addStretch(1);
-    buttons->addWidget(export_button_);
-
-    progress_ = new QProgressBar(this);
-    progress_->setRange(0, 0); // busy until a phase says how long it is (an age model's draws)
-    progress_->setVisible(false);
-    status_ = new QLabel(this);
-    status_->setWordWrap(true);
-    status_->setTextInteractionFlags(Qt::TextSelectableByMouse);
 
     auto *controls = new QVBoxLayout;
     controls->addLayout(form);
-    controls->addLayout(buttons);
-    controls->addWidget(progress_);
-    controls->addWidget(status_);
+    controls_->addTo(controls, export_button_);
     controls->addStretch(1);
     auto *side = new QWidget(this);
     side->setLayout(controls);
@@ -95,8 +79,7 @@ FigureWindow::FigureWindow(QWidget *parent)
     resize(1200, 760);
 
     connect(kind_, &QComboBox::currentIndexChanged, this, &FigureWindow::onKindChanged);
-    connect(draw_button_, &QPushButton::clicked, this, &FigureWindow::draw);
-    connect(stop_button_, &QPushButton::clicked, this, &FigureWindow::stop);
+    connect(controls_->startButton(), &QPushButton::clicked, this, &FigureWindow::draw);
     connect(export_button_, &QPushButton::clicked, this, [this] {
         const QString path = QFileDialog::getSaveFileName(
             this, tr("Export figure"), QString(), tr("Figures (*.svg *.pdf *.png)"));
@@ -107,7 +90,7 @@ FigureWindow::FigureWindow(QWidget *parent)
     onKindChanged();
 }
 
-FigureWindow::~FigureWindow() { delete job_; }
+FigureWindow::~FigureWindow() = default;
 
 void FigureWindow::setProject(const QString &path, const QStringList &holes) {
     project_ = path;
@@ -146,29 +129,17 @@ void FigureWindow::onKindChanged() {
 }
 
 bool FigureWindow::draw() {
-    if (job_ != nullptr) {
-        setStatus(tr("A figure is being drawn: wait for it or stop it first."), true);
-        return false;
-    }
     if (project_.isEmpty()) {
         setStatus(tr("Open a project first (File > Open)."), true);
         return false;
     }
-    const FigureRequest r = request();
-    job_ = new FigureJob(project_, r, cache_);
-    auto clock = std::make_shared<QElapsedTimer>();
-    clock->start();
-    connect(job_, &FigureJob::phase, this, [this](const QString &text) {
-        progress_->setRange(0, 0); // a new phase: busy until it reports its length
-        setStatus(text + "...", false);
-    });
-    connect(job_, &FigureJob::progressed, this, [this](int done, int total) {
-        progress_->setRange(0, total);
-        progress_->setValue(done);
-    });
-    connect(job_, &FigureJob::finished, this, [this, clock] {
-        std::optional<FigureResult> result = job_->takeResult();
-        endJob();
+    if (controls_->busy()) {
+        setStatus(tr("A figure is being drawn: wait for it or stop it first."), true);
+        return false;
+    }
+    auto *job = new FigureJob(project_, request(), cache_);
+    connect(job, &FigureJob::finished, this, [this, job] {
+        std::optional<FigureResult> result = job->takeResult();
         if (!result) {
             return;
         }
@@ -179,7 +150,7 @@ bool FigureWindow::draw() {
         shown_title_ = QString::fromStdString(result->title);
         setWindowTitle(shown_title_ + tr(" - atollog-view"));
         export_button_->setEnabled(true);
-        QString text = tr("Drawn in %1 s.").arg(static_cast<double>(clock->elapsed()) / 1000.0, 0, 'f', 1);
+        QString text = tr("Drawn in %1 s.").arg(controls_->elapsedSeconds(), 0, 'f', 1);
         if (!result->models_note.empty()) {
             QString note = QString::fromStdString(result->models_note);
             note[0] = note[0].toUpper();
@@ -189,42 +160,17 @@ bool FigureWindow::draw() {
             }
         }
         setStatus(text, false);
-        emit jobEnded();
     });
-    connect(job_, &FigureJob::failed, this, [this](const QString &message) {
-        endJob();
-        setStatus(tr("Cannot draw this figure: %1").arg(message), true);
-        emit jobEnded();
-    });
-    connect(job_, &FigureJob::cancelled, this, [this] {
-        endJob();
-        setStatus(tr("Stopped; nothing was stored."), false);
-        emit jobEnded();
-    });
-    draw_button_->setEnabled(false);
-    stop_button_->setEnabled(true);
-    progress_->setVisible(true);
-    setStatus(tr("Starting..."), false);
-    job_->start();
-    return true;
+    return controls_->run(job, tr("Cannot draw this figure"));
 }
 
-void FigureWindow::stop() {
-    if (job_ != nullptr) {
-        job_->cancel();
-        stop_button_->setEnabled(false);
-        setStatus(tr("Stopping after the current block of draws..."), false);
-    }
-}
+void FigureWindow::stop() { controls_->stop(); }
 
-void FigureWindow::endJob() {
-    job_->deleteLater();
-    job_ = nullptr;
-    draw_button_->setEnabled(true);
-    stop_button_->setEnabled(false);
-    progress_->setVisible(false);
-    progress_->setRange(0, 0);
-}
+bool FigureWindow::busy() const { return controls_->busy(); }
+QPushButton *FigureWindow::drawButton() const { return controls_->startButton(); }
+QPushButton *FigureWindow::stopButton() const { return controls_->stopButton(); }
+QLabel *FigureWindow::statusLabel() const { return controls_->statusLabel(); }
+QProgressBar *FigureWindow::progressBar() const { return controls_->bar(); }
 
 bool FigureWindow::exportTo(const QString &path) {
     try {
@@ -240,8 +186,7 @@ bool FigureWindow::exportTo(const QString &path) {
 }
 
 void FigureWindow::setStatus(const QString &text, bool error) {
-    status_->setStyleSheet(error ? QStringLiteral("color: #B00020;") : QString());
-    status_->setText(text);
+    controls_->setStatus(text, error);
 }
 
 } // namespace atollog::view

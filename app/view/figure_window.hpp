@@ -20,7 +20,7 @@ class QSpinBox;
 
 namespace atollog::view {
 
-class FigureJob;
+class JobControls;
 class PanelCanvas;
 
 class FigureWindow : public QWidget {
@@ -38,12 +38,12 @@ class FigureWindow : public QWidget {
     /// Starts drawing the requested figure; false (with the reason in the status line) when a
     /// job is already running or no project is open.
     bool draw();
-    /// Asks a running job to stop at its next phase.
+    /// Asks a running job to stop at its next phase or block of draws.
     void stop();
     /// Writes the figure shown to `path` (format by extension); false after a message.
     bool exportTo(const QString &path);
 
-    bool busy() const { return job_ != nullptr; }
+    bool busy() const;
     PanelCanvas *canvas() const { return canvas_; }
     QComboBox *kindCombo() const { return kind_; }
     QComboBox *holeCombo() const { return hole_; }
@@ -51,10 +51,10 @@ class FigureWindow : public QWidget {
     QCheckBox *extendBox() const { return extend_; }
     QCheckBox *coreTopOpenBox() const { return core_top_open_; }
     QSpinBox *drawsBox() const { return draws_; }
-    QPushButton *drawButton() const { return draw_button_; }
-    QPushButton *stopButton() const { return stop_button_; }
-    QLabel *statusLabel() const { return status_; }
-    QProgressBar *progressBar() const { return progress_; }
+    QPushButton *drawButton() const;
+    QPushButton *stopButton() const;
+    QLabel *statusLabel() const;
+    QProgressBar *progressBar() const;
     const QString &shownTitle() const { return shown_title_; }
 
   signals:
@@ -65,12 +65,11 @@ class FigureWindow : public QWidget {
 
   private:
     void onKindChanged();
-    void endJob();
     void setStatus(const QString &text, bool error);
 
     QString project_;
     std::shared_ptr<AgeModelCache> cache_;
-    FigureJob *job_ = nullptr;
+    JobControls *controls_ = nullptr;
     QString shown_title_;
 
     QComboBox *kind_ = nullptr;
@@ -80,11 +79,7 @@ class FigureWindow : public QWidget {
     QCheckBox *core_top_open_ = nullptr;
     QSpinBox *draws_ = nullptr;
     QSpinBox *seed_ = nullptr;
-    QPushButton *draw_button_ = nullptr;
-    QPushButton *stop_button_ = nullptr;
     QPushButton *export_button_ = nullptr;
-    QProgressBar *progress_ = nullptr;
-    QLabel *status_ = nullptr;
     PanelCanvas *canvas_ = nullptr;
 };
 

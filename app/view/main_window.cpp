@@ -4,6 +4,7 @@
 #include "draw/panel_layout.hpp"
 #include "view/exception_text.hpp"
 #include "atollog/db/project_store.hpp"
+#include "view/analysis_window.hpp"
 #include "view/figure_window.hpp"
 #include "view/logging_desk.hpp"
 #include "view/panel_canvas.hpp"
@@ -199,6 +200,9 @@ void MainWindow::buildMenus() {
     QMenu *analyses = menuBar()->addMenu(tr("&Analyses"));
     QAction *figures = analyses->addAction(tr("&Figures..."), this, &MainWindow::showFigures);
     figures->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_G));
+    QAction *runs = analyses->addAction(tr("&Picks, zones and sequence..."), this,
+                                        &MainWindow::showAnalyses);
+    runs->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_R));
 
     QMenu *view = menuBar()->addMenu(tr("&View"));
     view->setObjectName(QStringLiteral("view-menu"));
@@ -285,6 +289,13 @@ void MainWindow::rememberProject(const QString &path) {
         }
         figures_->setProject(path, holes);
     }
+    if (analyses_ != nullptr) {
+        QStringList holes;
+        for (const auto &column : full_.columns) {
+            holes << QString::fromStdString(column.hole);
+        }
+        analyses_->setProject(path, holes);
+    }
 }
 
 void MainWindow::refreshRecentMenu() {
@@ -317,6 +328,20 @@ FigureWindow *MainWindow::showFigures() {
     figures_->show();
     figures_->raise();
     return figures_;
+}
+
+AnalysisWindow *MainWindow::showAnalyses() {
+    if (analyses_ == nullptr) {
+        analyses_ = new AnalysisWindow(this);
+    }
+    QStringList holes;
+    for (const auto &column : full_.columns) {
+        holes << QString::fromStdString(column.hole);
+    }
+    analyses_->setProject(project_path_, holes);
+    analyses_->show();
+    analyses_->raise();
+    return analyses_;
 }
 
 void MainWindow::showPanel(draw::PanelInput full, const PanelChoice &choice) {

@@ -18,6 +18,7 @@ class QTimer;
 
 namespace atollog::view {
 
+class AnalysisWindow;
 class FigureWindow;
 class LoggingDesk;
 class PanelCanvas;
@@ -55,6 +56,8 @@ class MainWindow : public QMainWindow {
 
     /// The figures window (age-depth, rates, subsidence, ...) of the open project, shown.
     FigureWindow *showFigures();
+    /// The analyses window (datum picks, zones, composite sequence) of the open project, shown.
+    AnalysisWindow *showAnalyses();
     /// Paths of the projects opened lately, newest first (at most kRecentProjects).
     static QStringList recentProjects();
     static constexpr int kRecentProjects = 8;
@@ -94,6 +97,7 @@ class MainWindow : public QMainWindow {
     SidePane *side_ = nullptr;
     LoggingDesk *desk_ = nullptr;
     FigureWindow *figures_ = nullptr; ///< made on first use
+    AnalysisWindow *analyses_ = nullptr; ///< made on first use
     QMenu *recent_menu_ = nullptr;
     QTimer *panel_reload_ = nullptr; ///< one panel reload after a burst of desk edits
     QComboBox *flatten_ = nullptr;

@@ -2,6 +2,7 @@
 // commands' --plot (an exported SVG is byte for byte the command's), age models stored once
 // with their provenance and reused, and a stopped job stores nothing, also when stopped in the
 // middle of an age model's draws.
+#include "imported_demo.hpp"
 #include "cli/cli_runner.hpp"
 
 #include "view/figure_request.hpp"
@@ -26,26 +27,10 @@
 #include <sstream>
 
 using namespace atollog;
+using namespace atollog::view::test;
 using view::FigureKind;
 
 namespace {
-
-/// A fresh copy of the demo per case: figures store model runs.
-struct DemoCopy {
-    test::TempDir dir{"view-figures"};
-    std::filesystem::path project = dir / "demo.atollog";
-    DemoCopy() {
-        const auto r = test::runAtollog(
-            {"import", project.string(), std::string(ATOLLOG_SOURCE_DIR) + "/cores-demo/archipelago"});
-        REQUIRE(r.exit_code == 0);
-    }
-    std::size_t modelRuns(const std::string &kind) const {
-        db::ProjectStore store = db::ProjectStore::open(project);
-        std::size_t n = 0;
-        for (const auto &run : store.modelRuns()) n += run.kind == kind ? 1 : 0;
-        return n;
-    }
-};
 
 /// The demo's usual model options (run-demo.sh), few draws to keep the tests quick.
 view::FigureRequest demoRequest(FigureKind kind, const std::string &hole = "KAL1",
@@ -66,17 +51,10 @@ bool hasRole(const draw::DisplayList &list, draw::ItemRole role) {
     return !list.withRole(role).empty();
 }
 
-std::string fileText(const std::filesystem::path &p) {
-    std::ifstream in(p, std::ios::binary);
-    std::ostringstream s;
-    s << in.rdbuf();
-    return s.str();
-}
-
 } // namespace
 
 TEST_CASE("Every figure kind draws from the demo project", "[view][figures]") {
-    DemoCopy demo;
+    ImportedDemo demo;
     view::AgeModelCache cache;
     const std::vector<std::pair<view::FigureRequest, draw::ItemRole>> cases{
         {demoRequest(FigureKind::RangeChart, "TOR1"), draw::ItemRole::TaxonRangeBar},
@@ -96,9 +74,9 @@ TEST_CASE("Every figure kind draws from the demo project", "[view][figures]") {
 
 TEST_CASE("An exported age-depth figure is the command's --plot, byte for byte",
           "[view][figures]") {
-    DemoCopy demo;
+    ImportedDemo demo;
     const auto cli_svg = demo.dir / "cli.svg";
-    const auto r = test::runAtollog({"age", demo.project.string(), "--hole", "KAL1", "--extend",
+    const auto r = atollog::test::runAtollog({"age", demo.project.string(), "--hole", "KAL1", "--extend",
                                      "0.95", "--ties-extended", "--core-top-open", "--draws",
                                      "2000", "--plot", cli_svg.string(), "--no-store"});
     REQUIRE(r.exit_code == 0);
@@ -124,7 +102,7 @@ TEST_CASE("An exported age-depth figure is the command's --plot, byte for byte",
 
 TEST_CASE("An age model is built once per data and settings, and stored with its provenance",
           "[view][figures]") {
-    DemoCopy demo;
+    ImportedDemo demo;
     view::AgeModelCache cache;
     const auto first = view::makeFigure(demo.project, demoRequest(FigureKind::AgeDepth), cache);
     CHECK(first.models_note.find("stored as run #") != std::string::npos);
@@ -158,7 +136,7 @@ TEST_CASE("An age model is built once per data and settings, and stored with its
 }
 
 TEST_CASE("A stopped figure stores nothing", "[view][figures]") {
-    DemoCopy demo;
+    ImportedDemo demo;
     view::AgeModelCache cache;
     for (const std::string stop_at : {"age model of", "storing"}) {
         INFO("stop at " << stop_at);
@@ -223,7 +201,7 @@ TEST_CASE("A stopped figure stores nothing", "[view][figures]") {
 }
 
 TEST_CASE("A figure that cannot be drawn says why in the window", "[view][figures][bad-input]") {
-    DemoCopy demo;
+    ImportedDemo demo;
     view::FigureWindow window;
     window.setProject(QString::fromStdString(demo.project.string()), {"OSS1", "PEL1"});
     window.kindCombo()->setCurrentText("Line of correlation");
@@ -241,7 +219,7 @@ TEST_CASE("A figure that cannot be drawn says why in the window", "[view][figure
 
 TEST_CASE("The main window opens the figures of its project and lists recent projects",
           "[view][figures]") {
-    DemoCopy demo;
+    ImportedDemo demo;
     QStringList messages;
     view::MainWindow window;
     window.setMessageSink([&](const QString &t, const QString &m) { messages << t + ": " + m; });
@@ -265,7 +243,7 @@ TEST_CASE("The main window opens the figures of its project and lists recent pro
 }
 
 TEST_CASE("figures window for a look", "[.look]") {
-    DemoCopy demo;
+    ImportedDemo demo;
     view::FigureWindow window;
     window.setProject(QString::fromStdString(demo.project.string()), {"KAL1", "TOR1", "OSS1", "PEL1"});
     window.kindCombo()->setCurrentText("Accretion rate against age");
