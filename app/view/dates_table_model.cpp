@@ -22,7 +22,7 @@ QString optionalText(const std::optional<double> &v) { return v ? exactNumberTex
 
 } // namespace
 
-DatesTableModel::DatesTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
+DatesTableModel::DatesTableModel(DeskProject &desk, QObject *parent) : DeskRows(desk, parent) {}
 
 QString DatesTableModel::columnTitle(int column) const {
     switch (column) {
@@ -79,20 +79,6 @@ QVariant DatesTableModel::data(const QModelIndex &index, int role) const {
         return words;
     }
     return {};
-}
-
-int DatesTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
-    return static_cast<int>(std::count_if(data.dates.begin(), data.dates.end(),
-                                          [&](const NumericalDate &d) { return d.hole == hole; }));
-}
-
-void DatesTableModel::readRows(const CoreDataset &data, const std::string &hole) {
-    rows_.clear();
-    for (const NumericalDate &d : data.dates) {
-        if (d.hole == hole) {
-            rows_.push_back(d);
-        }
-    }
 }
 
 QString DatesTableModel::cellText(int r, int column) const {

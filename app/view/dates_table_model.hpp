@@ -5,13 +5,13 @@
 // values a measurement needs, so it is typed in one go and never half there), the optional
 // 232Th and 238U concentrations (ppb), F14C ± sd, and the reservoir offset ΔR ± sd (years).
 // Measured values are shown at full precision. Clearing a measurement cell removes it.
-#include "view/desk_table_model.hpp"
+#include "view/desk_rows.hpp"
 
 #include <vector>
 
 namespace atollog::view {
 
-class DatesTableModel : public DeskTableModel {
+class DatesTableModel : public DeskRows<NumericalDate> {
     Q_OBJECT
 
   public:
@@ -25,16 +25,12 @@ class DatesTableModel : public DeskTableModel {
     /// hole's samples.
     QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
 
-    const NumericalDate &dateAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+    const NumericalDate &dateAt(int r) const { return rowAt(r); }
 
   protected:
     int columnTotal() const override { return ColumnCount; }
     QString columnTitle(int column) const override;
     QString columnTip(int column) const override;
-    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
-    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
-    void readRows(const CoreDataset &data, const std::string &hole) override;
-    db::EditableRow row(int r) const override { return dateAt(r); }
     QString cellText(int r, int column) const override;
     bool isEditable(int /*column*/) const override { return true; }
     TypedRow typed(int r, int column, const QString &text) const override;
@@ -43,9 +39,6 @@ class DatesTableModel : public DeskTableModel {
     /// A copy of the hole's last date, to be typed over (a date needs an age or a measurement
     /// from the start, and the desk does not invent one).
     TypedRow newRow() const override;
-
-  private:
-    std::vector<NumericalDate> rows_;
 };
 
 } // namespace atollog::view

@@ -15,7 +15,7 @@ QString word(std::string_view w) { return QString::fromUtf8(w.data(), static_cas
 
 } // namespace
 
-EventsTableModel::EventsTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
+EventsTableModel::EventsTableModel(DeskProject &desk, QObject *parent) : DeskRows(desk, parent) {}
 
 QString EventsTableModel::columnTitle(int column) const {
     switch (column) {
@@ -57,14 +57,6 @@ QVariant EventsTableModel::data(const QModelIndex &index, int role) const {
         return words;
     }
     return {};
-}
-
-int EventsTableModel::rowsIn(const CoreDataset &data, const std::string & /*hole*/) const {
-    return static_cast<int>(data.events.size());
-}
-
-void EventsTableModel::readRows(const CoreDataset &data, const std::string & /*hole*/) {
-    rows_ = data.events;
 }
 
 QString EventsTableModel::cellText(int r, int column) const {

@@ -2,13 +2,13 @@
 // The project's time-scale events (datums), in stored order, whatever hole is chosen: id, the
 // taxon whose base or top it is, the kind (base or top), its age and sd in Ma, the source.
 // Removing an event that zones still use is refused by the db, the zones counted.
-#include "view/desk_table_model.hpp"
+#include "view/desk_rows.hpp"
 
 #include <vector>
 
 namespace atollog::view {
 
-class EventsTableModel : public DeskTableModel {
+class EventsTableModel : public DeskRows<TimeScaleEvent> {
     Q_OBJECT
 
   public:
@@ -19,16 +19,12 @@ class EventsTableModel : public DeskTableModel {
     /// Kind offers base and top, taxon the project's taxa (kWordChoicesRole).
     QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
 
-    const TimeScaleEvent &eventAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+    const TimeScaleEvent &eventAt(int r) const { return rowAt(r); }
 
   protected:
     int columnTotal() const override { return ColumnCount; }
     QString columnTitle(int column) const override;
     QString columnTip(int column) const override;
-    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
-    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
-    void readRows(const CoreDataset &data, const std::string &hole) override;
-    db::EditableRow row(int r) const override { return eventAt(r); }
     QString cellText(int r, int column) const override;
     bool isEditable(int /*column*/) const override { return true; }
     TypedRow typed(int r, int column, const QString &text) const override;
@@ -36,9 +32,6 @@ class EventsTableModel : public DeskTableModel {
     QString rowName(int r) const override;
     /// A copy of the last event under the next free id, to be typed over.
     TypedRow newRow() const override;
-
-  private:
-    std::vector<TimeScaleEvent> rows_;
 };
 
 } // namespace atollog::view

@@ -20,7 +20,7 @@ QString optionalText(const std::optional<double> &value) {
 
 } // namespace
 
-HolesTableModel::HolesTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
+HolesTableModel::HolesTableModel(DeskProject &desk, QObject *parent) : DeskRows(desk, parent) {}
 
 QString HolesTableModel::columnTitle(int column) const {
     switch (column) {
@@ -63,14 +63,6 @@ QVariant HolesTableModel::data(const QModelIndex &index, int role) const {
         words << word(toString(k));
     }
     return words;
-}
-
-int HolesTableModel::rowsIn(const CoreDataset &data, const std::string & /*hole*/) const {
-    return static_cast<int>(data.holes.size());
-}
-
-void HolesTableModel::readRows(const CoreDataset &data, const std::string & /*hole*/) {
-    rows_ = data.holes;
 }
 
 QString HolesTableModel::cellText(int r, int column) const {

@@ -46,7 +46,7 @@ std::optional<TextureSuggestion> suggestionFor(const LithInterval &v) {
 } // namespace
 
 IntervalsTableModel::IntervalsTableModel(DeskProject &desk, QObject *parent)
-    : DeskTableModel(desk, parent) {}
+    : DeskRows(desk, parent) {}
 
 QString IntervalsTableModel::columnTitle(int column) const {
     const QString unit = unitSymbol(depthUnit());
@@ -82,20 +82,6 @@ QString IntervalsTableModel::columnTip(int column) const {
     case Texture: return tr("One of: %1").arg(word(allowedWords<atollog::Texture>()));
     case Surface: return tr("One of: %1").arg(word(allowedWords<atollog::Surface>()));
     default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
-    }
-}
-
-int IntervalsTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
-    return static_cast<int>(std::count_if(data.intervals.begin(), data.intervals.end(),
-                                          [&](const LithInterval &v) { return v.hole == hole; }));
-}
-
-void IntervalsTableModel::readRows(const CoreDataset &data, const std::string &hole) {
-    rows_.clear();
-    for (const LithInterval &v : data.intervals) {
-        if (v.hole == hole) {
-            rows_.push_back(v);
-        }
     }
 }
 

@@ -4,13 +4,13 @@
 // classifier (Dunham 1962 with Embry & Klovan 1971) suggests from them (computed, read only)
 // beside the texture as logged, then surface, paleodepths, physical properties and notes.
 // addInterval puts a new interval below the deepest one (next_interval.hpp).
-#include "view/desk_table_model.hpp"
+#include "view/desk_rows.hpp"
 
 #include <vector>
 
 namespace atollog::view {
 
-class IntervalsTableModel : public DeskTableModel {
+class IntervalsTableModel : public DeskRows<LithInterval> {
     Q_OBJECT
 
   public:
@@ -22,7 +22,7 @@ class IntervalsTableModel : public DeskTableModel {
     explicit IntervalsTableModel(DeskProject &desk, QObject *parent = nullptr);
 
 
-    const LithInterval &intervalAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+    const LithInterval &intervalAt(int r) const { return rowAt(r); }
 
     /// Adds the hole's next interval (nextInterval) through the undo stack. Returns the new
     /// row's index (its base cell, the one to type next), or an invalid index when there is
@@ -36,10 +36,6 @@ class IntervalsTableModel : public DeskTableModel {
     int columnTotal() const override { return ColumnCount; }
     QString columnTitle(int column) const override;
     QString columnTip(int column) const override;
-    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
-    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
-    void readRows(const CoreDataset &data, const std::string &hole) override;
-    db::EditableRow row(int r) const override { return intervalAt(r); }
     QString cellText(int r, int column) const override;
     QString cellToolTip(int r, int column) const override;
     bool isEditable(int column) const override { return column != Suggested; }
@@ -49,9 +45,6 @@ class IntervalsTableModel : public DeskTableModel {
     /// The same interval as addInterval (nextInterval), for the generic addRow.
     TypedRow newRow() const override;
     int firstNewRowColumn() const override { return Base; }
-
-  private:
-    std::vector<LithInterval> rows_;
 };
 
 } // namespace atollog::view

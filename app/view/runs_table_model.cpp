@@ -15,7 +15,7 @@ const char *const kFieldNames[] = {"run", "top_m", "base_m", "recovered_m", "cor
 
 } // namespace
 
-RunsTableModel::RunsTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
+RunsTableModel::RunsTableModel(DeskProject &desk, QObject *parent) : DeskRows(desk, parent) {}
 
 QString RunsTableModel::columnTitle(int column) const {
     const QString unit = unitSymbol(depthUnit());
@@ -35,20 +35,6 @@ QString RunsTableModel::columnTip(int column) const {
     case Cored: return tr("Base minus top; computed");
     case Recovery: return tr("Recovered over cored length; computed, updated as you log");
     default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
-    }
-}
-
-int RunsTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
-    return static_cast<int>(std::count_if(data.runs.begin(), data.runs.end(),
-                                          [&](const CoreRun &r) { return r.hole == hole; }));
-}
-
-void RunsTableModel::readRows(const CoreDataset &data, const std::string &hole) {
-    rows_.clear();
-    for (const CoreRun &r : data.runs) {
-        if (r.hole == hole) {
-            rows_.push_back(r);
-        }
     }
 }
 

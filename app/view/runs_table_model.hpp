@@ -2,13 +2,13 @@
 // The core runs of the chosen hole, one per line, in stored order: run id, top, base and
 // recovered length typed in the desk's depth unit, and the run's cored length and recovery
 // (recovered / cored, in %) computed, read only, so the recovery follows what is typed.
-#include "view/desk_table_model.hpp"
+#include "view/desk_rows.hpp"
 
 #include <vector>
 
 namespace atollog::view {
 
-class RunsTableModel : public DeskTableModel {
+class RunsTableModel : public DeskRows<CoreRun> {
     Q_OBJECT
 
   public:
@@ -17,16 +17,12 @@ class RunsTableModel : public DeskTableModel {
     explicit RunsTableModel(DeskProject &desk, QObject *parent = nullptr);
 
 
-    const CoreRun &runAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+    const CoreRun &runAt(int r) const { return rowAt(r); }
 
   protected:
     int columnTotal() const override { return ColumnCount; }
     QString columnTitle(int column) const override;
     QString columnTip(int column) const override;
-    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
-    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
-    void readRows(const CoreDataset &data, const std::string &hole) override;
-    db::EditableRow row(int r) const override { return runAt(r); }
     QString cellText(int r, int column) const override;
     bool isEditable(int column) const override { return column < Cored; }
     TypedRow typed(int r, int column, const QString &text) const override;
@@ -36,9 +32,6 @@ class RunsTableModel : public DeskTableModel {
     /// is usually the same), nothing recovered yet, its id counted on from that run's.
     TypedRow newRow() const override;
     int firstNewRowColumn() const override { return Base; }
-
-  private:
-    std::vector<CoreRun> rows_;
 };
 
 /// Length of a hole's first run when there is no run to take it from: our first guess, typed over.

@@ -14,7 +14,7 @@ const char *const kFieldNames[] = {"sample", "top_m", "base_m", "kind"};
 } // namespace
 
 SamplesTableModel::SamplesTableModel(DeskProject &desk, QObject *parent)
-    : DeskTableModel(desk, parent) {}
+    : DeskRows(desk, parent) {}
 
 QString SamplesTableModel::columnTitle(int column) const {
     const QString unit = unitSymbol(depthUnit());
@@ -32,20 +32,6 @@ QString SamplesTableModel::columnTip(int column) const {
     case Base: return tr("Equal to the top for a point sample");
     case Kind: return tr("A free word: core, cuttings, barren, ...");
     default: return tr("Stored as %1").arg(QLatin1String(kFieldNames[column]));
-    }
-}
-
-int SamplesTableModel::rowsIn(const CoreDataset &data, const std::string &hole) const {
-    return static_cast<int>(std::count_if(data.samples.begin(), data.samples.end(),
-                                          [&](const Sample &s) { return s.hole == hole; }));
-}
-
-void SamplesTableModel::readRows(const CoreDataset &data, const std::string &hole) {
-    rows_.clear();
-    for (const Sample &s : data.samples) {
-        if (s.hole == hole) {
-            rows_.push_back(s);
-        }
     }
 }
 

@@ -16,7 +16,7 @@ QString optionalText(const std::optional<std::string> &v) {
 
 } // namespace
 
-ZonesTableModel::ZonesTableModel(DeskProject &desk, QObject *parent) : DeskTableModel(desk, parent) {}
+ZonesTableModel::ZonesTableModel(DeskProject &desk, QObject *parent) : DeskRows(desk, parent) {}
 
 QString ZonesTableModel::columnTitle(int column) const {
     switch (column) {
@@ -49,14 +49,6 @@ QVariant ZonesTableModel::data(const QModelIndex &index, int role) const {
         return words;
     }
     return {};
-}
-
-int ZonesTableModel::rowsIn(const CoreDataset &data, const std::string & /*hole*/) const {
-    return static_cast<int>(data.zones.size());
-}
-
-void ZonesTableModel::readRows(const CoreDataset &data, const std::string & /*hole*/) {
-    rows_ = data.zones;
 }
 
 QString ZonesTableModel::cellText(int r, int column) const {

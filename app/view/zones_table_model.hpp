@@ -1,13 +1,13 @@
 #pragma once
 // The project's biozones, in stored order, whatever hole is chosen: scheme, zone, and the
 // events bounding its base and top (ids of the events table; empty leaves that end open).
-#include "view/desk_table_model.hpp"
+#include "view/desk_rows.hpp"
 
 #include <vector>
 
 namespace atollog::view {
 
-class ZonesTableModel : public DeskTableModel {
+class ZonesTableModel : public DeskRows<Zone> {
     Q_OBJECT
 
   public:
@@ -18,16 +18,12 @@ class ZonesTableModel : public DeskTableModel {
     /// The event columns offer the project's event ids, "" first (kWordChoicesRole).
     QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
 
-    const Zone &zoneAt(int r) const { return rows_.at(static_cast<std::size_t>(r)); }
+    const Zone &zoneAt(int r) const { return rowAt(r); }
 
   protected:
     int columnTotal() const override { return ColumnCount; }
     QString columnTitle(int column) const override;
     QString columnTip(int column) const override;
-    int storedRowCount() const override { return static_cast<int>(rows_.size()); }
-    int rowsIn(const CoreDataset &data, const std::string &hole) const override;
-    void readRows(const CoreDataset &data, const std::string &hole) override;
-    db::EditableRow row(int r) const override { return zoneAt(r); }
     QString cellText(int r, int column) const override;
     bool isEditable(int /*column*/) const override { return true; }
     TypedRow typed(int r, int column, const QString &text) const override;
@@ -37,9 +33,6 @@ class ZonesTableModel : public DeskTableModel {
     /// the event that tops the last zone, its top open, to be typed.
     TypedRow newRow() const override;
     int firstNewRowColumn() const override { return TopEvent; }
-
-  private:
-    std::vector<Zone> rows_;
 };
 
 } // namespace atollog::view
