@@ -103,7 +103,7 @@ TEST_CASE("holes: collar height in feet, a cleared position, and refusals",
         CHECK(d.holes.headerData(HoleCol::CollarElevation, Qt::Horizontal).toString()
                   .contains(QLatin1String("(ft)")));
         REQUIRE(d.type(tor, HoleCol::CollarElevation, QStringLiteral("10")));
-        const Hole &h = d.copy.readBack().holes[static_cast<std::size_t>(tor)];
+        const Hole h = d.copy.readBack().holes[static_cast<std::size_t>(tor)];
         REQUIRE(h.collar_elev_m.has_value());
         CHECK(*h.collar_elev_m == Approx(3.048).epsilon(1e-12));
         CHECK(d.cell(tor, HoleCol::CollarElevation) == QLatin1String("10"));
@@ -147,7 +147,7 @@ TEST_CASE("holes: added, removed, and a hole with runs kept", "[view][desk][hole
     }
     const QModelIndex added = d.holes.addRow();
     REQUIRE(added.isValid());
-    const Hole &h = d.holes.holeAt(added.row());
+    const Hole h = d.holes.holeAt(added.row());
     CHECK(h.hole == "PEL2"); // after the last hole, PEL1
     CHECK(h.site == original.holes.back().site);
     CHECK_FALSE(h.lat_deg.has_value());
